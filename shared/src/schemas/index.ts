@@ -1,0 +1,3 @@
+export * from './roles.js';
+export * from './doc-set-settings.js';
+export * from './common.js';
