@@ -1,0 +1,3 @@
+// One file per aggregate; every table of the product is exported here for Drizzle and drizzle-kit.
+export * from './users.js';
+export * from './audit-log.js';
