@@ -1,4 +1,5 @@
 import type { Type } from '@nestjs/common';
+import { DocSetsModule } from './modules/doc-sets/doc-sets.module.js';
 
 /** The product's capability modules (doc sets, imports, runs, work, mail...), listed once. */
-export const FEATURE_MODULES: Type[] = [];
+export const FEATURE_MODULES: Type[] = [DocSetsModule];

@@ -1,3 +1,6 @@
 // One file per aggregate; every table of the product is exported here for Drizzle and drizzle-kit.
 export * from './users.js';
 export * from './audit-log.js';
+export * from './doc-sets.js';
+export * from './snapshots.js';
+export * from './runs.js';
