@@ -4,6 +4,7 @@ import { ScheduleModule } from '@nestjs/schedule';
 import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
 import { AllExceptionsFilter } from './common/exception.filter.js';
 import { AuthGuard } from './common/auth.guard.js';
+import { DomainEventsModule } from './common/events/domain-events.js';
 import { LifecycleModule } from './common/lifecycle/lifecycle.module.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { DbModule } from './db/db.module.js';
@@ -25,6 +26,7 @@ export class AppModule {
         ScheduleModule.forRoot(),
         ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: 1_200 }]),
         LifecycleModule,
+        DomainEventsModule,
         DbModule,
         AuditModule,
         AuthModule,

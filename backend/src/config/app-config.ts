@@ -31,6 +31,10 @@ export interface AppConfig {
   frontendDist: string | null;
   /** Seconds between outbox delivery attempts (base of the backoff). */
   mailRetryBaseSeconds: number;
+  /** Port of the built-in local mailbox on 127.0.0.1 (0 = any free port). */
+  mailboxPort: number;
+  /** How often the outbox sender looks for due messages. */
+  mailPollMs: number;
   backupsKept: number;
 }
 
@@ -112,6 +116,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     logRequests: bool(env, 'LOG_REQUESTS', true, problems),
     frontendDist: null,
     mailRetryBaseSeconds: int(env, 'MAIL_RETRY_BASE_SECONDS', 30, problems, 1),
+    mailboxPort: int(env, 'MAILBOX_PORT', 0, problems, 0, 65535),
+    mailPollMs: int(env, 'MAIL_POLL_MS', 5000, problems, 50),
     backupsKept: int(env, 'BACKUPS_KEPT', 7, problems, 1, 365),
     ...overrides,
   };

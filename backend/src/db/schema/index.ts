@@ -4,3 +4,5 @@ export * from './audit-log.js';
 export * from './doc-sets.js';
 export * from './snapshots.js';
 export * from './runs.js';
+export * from './mail.js';
+export * from './work.js';

@@ -1,0 +1,2 @@
+CREATE UNIQUE INDEX "snapshots_one_import_per_doc_set" ON "snapshots" USING btree ("doc_set_id") WHERE status in ('received', 'importing');--> statement-breakpoint
+CREATE INDEX "snapshots_created_by_idx" ON "snapshots" USING btree ("created_by","created_at");
