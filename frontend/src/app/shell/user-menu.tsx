@@ -1,0 +1,38 @@
+import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { Avatar, Button, Divider, ListItemIcon, Menu, MenuItem, Typography } from '@mui/material';
+import KeyOutlined from '@mui/icons-material/KeyOutlined';
+import Logout from '@mui/icons-material/Logout';
+import { useSession } from '../../lib/session.js';
+import { useSignOut } from '../../features/auth/api/sign-out.js';
+
+export function UserMenu() {
+  const session = useSession();
+  const navigate = useNavigate();
+  const signOut = useSignOut();
+  const [anchor, setAnchor] = useState<HTMLElement | null>(null);
+  if (!session) return null;
+  const { user } = session;
+  const close = () => setAnchor(null);
+  return (
+    <>
+      <Button color="inherit" onClick={(e) => setAnchor(e.currentTarget)} aria-haspopup="menu"
+        aria-label={`Account menu for ${user.name}`} startIcon={<Avatar sx={{ width: 28, height: 28, fontSize: 14, bgcolor: 'secondary.main' }}>{user.name.slice(0, 1).toUpperCase()}</Avatar>}>
+        {user.name}
+      </Button>
+      <Menu anchorEl={anchor} open={anchor !== null} onClose={close}>
+        <MenuItem disabled sx={{ opacity: '1 !important', display: 'block' }}>
+          <Typography variant="body2">{user.email}</Typography>
+          <Typography variant="caption" color="text.secondary">Role: {user.role}</Typography>
+        </MenuItem>
+        <Divider />
+        <MenuItem onClick={() => { close(); navigate('/account'); }}>
+          <ListItemIcon><KeyOutlined fontSize="small" /></ListItemIcon>Change password
+        </MenuItem>
+        <MenuItem onClick={() => { close(); signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') }); }}>
+          <ListItemIcon><Logout fontSize="small" /></ListItemIcon>Sign out
+        </MenuItem>
+      </Menu>
+    </>
+  );
+}
