@@ -1,0 +1,24 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { ListResult } from '@linkloom/shared';
+import { apiFetch } from '../../../lib/api-client.js';
+import { runQueryKey } from '../../pages/api/get-run.js';
+import { runPath } from '../../pages/api/run-path.js';
+import type { LinkTargetGroup } from '../types.js';
+import { linksQueryParams, type LinksQuery } from './get-links.js';
+
+/** The same links, one row per missing target with the pages that point at it. */
+export function getLinksByTarget(docSetId: string, runId: string, query: LinksQuery, signal?: AbortSignal): Promise<ListResult<LinkTargetGroup>> {
+  return apiFetch<ListResult<LinkTargetGroup>>(`${runPath(docSetId, runId)}/links`, { query: linksQueryParams(query, 'target'), signal });
+}
+
+export function linksByTargetQueryOptions(docSetId: string, runId: string, query: LinksQuery) {
+  return queryOptions({
+    queryKey: [...runQueryKey(docSetId, runId), 'links', linksQueryParams(query, 'target')] as const,
+    queryFn: ({ signal }) => getLinksByTarget(docSetId, runId, query, signal),
+    placeholderData: keepPreviousData,
+  });
+}
+
+export function useLinksByTarget(docSetId: string, runId: string, query: LinksQuery, enabled = true) {
+  return useQuery({ ...linksByTargetQueryOptions(docSetId, runId, query), enabled });
+}

@@ -1,0 +1,34 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { ListResult } from '@linkloom/shared';
+import { apiFetch, type Query } from '../../../lib/api-client.js';
+import { runQueryKey } from '../../pages/api/get-run.js';
+import { runPath } from '../../pages/api/run-path.js';
+import type { LinkRow, LinkStatus } from '../types.js';
+
+export interface LinksQuery {
+  status: LinkStatus;
+  page: number;
+  pageSize: number;
+  sort?: string;
+  q?: string;
+}
+
+export function linksQueryParams(query: LinksQuery, groupBy?: 'target'): Query {
+  return { status: query.status, page: query.page, pageSize: query.pageSize, sort: query.sort, q: query.q, groupBy };
+}
+
+export function getLinks(docSetId: string, runId: string, query: LinksQuery, signal?: AbortSignal): Promise<ListResult<LinkRow>> {
+  return apiFetch<ListResult<LinkRow>>(`${runPath(docSetId, runId)}/links`, { query: linksQueryParams(query), signal });
+}
+
+export function linksQueryOptions(docSetId: string, runId: string, query: LinksQuery) {
+  return queryOptions({
+    queryKey: [...runQueryKey(docSetId, runId), 'links', linksQueryParams(query)] as const,
+    queryFn: ({ signal }) => getLinks(docSetId, runId, query, signal),
+    placeholderData: keepPreviousData,
+  });
+}
+
+export function useLinks(docSetId: string, runId: string, query: LinksQuery, enabled = true) {
+  return useQuery({ ...linksQueryOptions(docSetId, runId, query), enabled });
+}
