@@ -1,0 +1,61 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { type AuthUser, CurrentUser, MinRole } from '../../common/auth.decorators.js';
+import { ApiZodBody, ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
+import {
+  type BulkCreateTasksInput, bulkCreateTasksSchema, commentSchema, type CreateTaskInput, createTaskSchema, type ListTasksQuery,
+  listTasksQuerySchema, type UpdateTaskInput, updateTaskSchema,
+} from './task.schemas.js';
+import { TasksService } from './tasks.service.js';
+
+@ApiTags('tasks')
+@ApiBearerAuth()
+@Controller('tasks')
+export class TasksController {
+  constructor(private readonly tasks: TasksService) {}
+
+  @Get()
+  @ApiZodQuery(listTasksQuerySchema)
+  list(@CurrentUser() actor: AuthUser, @Query(new ZodPipe(listTasksQuerySchema)) query: ListTasksQuery) {
+    return this.tasks.list(actor, query);
+  }
+
+  @Get('assignees')
+  @MinRole('editor')
+  assignees() {
+    return this.tasks.assignees().then((items) => ({ items, total: items.length, page: 1, pageSize: items.length }));
+  }
+
+  @Post()
+  @MinRole('editor')
+  @ApiZodBody(createTaskSchema)
+  create(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(createTaskSchema)) body: CreateTaskInput) {
+    return this.tasks.create(actor, body);
+  }
+
+  @Post('bulk')
+  @MinRole('editor')
+  @ApiZodBody(bulkCreateTasksSchema)
+  bulkCreate(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(bulkCreateTasksSchema)) body: BulkCreateTasksInput) {
+    return this.tasks.bulkCreate(actor, body);
+  }
+
+  @Get(':taskId')
+  get(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string) {
+    return this.tasks.get(actor, id);
+  }
+
+  @Patch(':taskId')
+  @MinRole('writer')
+  @ApiZodBody(updateTaskSchema)
+  update(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string, @Body(new ZodPipe(updateTaskSchema)) body: UpdateTaskInput) {
+    return this.tasks.update(actor, id, body);
+  }
+
+  @Post(':taskId/comments')
+  @MinRole('writer')
+  @ApiZodBody(commentSchema)
+  comment(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string, @Body(new ZodPipe(commentSchema)) body: { body: string }) {
+    return this.tasks.comment(actor, id, body.body);
+  }
+}

@@ -1,0 +1,27 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { apiFetch } from '../../../lib/api-client.js';
+import type { PruningList, PruningStatusFilter } from '../types.js';
+
+export const pruningQueryKey = (docSetId: string) => ['pruning', docSetId] as const;
+
+export interface PruningQuery {
+  status: PruningStatusFilter;
+  page: number;
+  pageSize: number;
+}
+
+export function getPruningList(docSetId: string, query: PruningQuery, signal?: AbortSignal): Promise<PruningList> {
+  return apiFetch<PruningList>(`/doc-sets/${encodeURIComponent(docSetId)}/pruning`, { query: { ...query, status: query.status || undefined }, signal });
+}
+
+export function pruningListQueryOptions(docSetId: string, query: PruningQuery) {
+  return queryOptions({
+    queryKey: [...pruningQueryKey(docSetId), query] as const,
+    queryFn: ({ signal }) => getPruningList(docSetId, query, signal),
+    placeholderData: keepPreviousData,
+  });
+}
+
+export function usePruningList(docSetId: string, query: PruningQuery) {
+  return useQuery(pruningListQueryOptions(docSetId, query));
+}
