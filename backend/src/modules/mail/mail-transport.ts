@@ -23,7 +23,7 @@ export class MailTransport {
     const timeouts = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 };
     this.transporter =
       typeof target === 'string'
-        ? nodemailer.createTransport(target, timeouts)
+        ? nodemailer.createTransport({ url: target, ...timeouts } as Parameters<typeof nodemailer.createTransport>[0])
         : nodemailer.createTransport({ ...target, secure: false, ignoreTLS: true, ...timeouts });
   }
 

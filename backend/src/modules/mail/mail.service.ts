@@ -64,9 +64,10 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
         if (!ok) this.logger.warn(`Skipped an e-mail to an address that is not a plain address: ${JSON.stringify(m.toAddress).slice(0, 80)}`);
         return ok;
       })
-      .map((m) => {
+      .map(({ dedupeKey, ...m }) => {
         const id = randomUUID();
-        return { ...m, id, messageId: `<${id}@linkloom.local>`, subject: singleLineSubject(m.subject) };
+        const key = dedupeKey ? dedupeKey.replace(/[^A-Za-z0-9.-]/g, '-').slice(0, 120) : id;
+        return { ...m, id, messageId: `<${key}@linkloom.local>`, subject: singleLineSubject(m.subject) };
       });
     await this.outbox.insert(rows, executor);
     return rows.map((r) => r.id);

@@ -5,14 +5,15 @@ import type { Executor } from '../../db/database.js';
 import { outbox } from '../../db/schema/index.js';
 
 export type OutboxRow = typeof outbox.$inferSelect;
-export type NewOutboxMessage = Pick<OutboxRow, 'kind' | 'toAddress' | 'subject' | 'text' | 'html'> & { docSetId?: string | null };
+export type NewOutboxMessage = Pick<OutboxRow, 'kind' | 'toAddress' | 'subject' | 'text' | 'html'> & { docSetId?: string | null; dedupeKey?: string };
 
 @Injectable()
 export class OutboxRepository {
   constructor(private readonly database: DbService) {}
 
   async insert(messages: (NewOutboxMessage & { id: string; messageId: string })[], executor: Executor = this.database.db): Promise<void> {
-    if (messages.length) await executor.insert(outbox).values(messages);
+    // A fixed Message-ID (e.g. one digest per run and user) makes enqueueing the same mail twice harmless.
+    if (messages.length) await executor.insert(outbox).values(messages).onConflictDoNothing({ target: outbox.messageId });
   }
 
   /** Claims due messages: marks them `sending` and counts the attempt, so a second sender skips them. */
