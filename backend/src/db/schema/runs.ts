@@ -38,6 +38,8 @@ export const runs = pgTable(
     durationMs: integer('duration_ms'),
     counts: jsonb('counts').$type<RunCounts>(),
     error: text('error'),
+    /** Things a reader should know about how the run was made (e.g. no entry page found). */
+    warnings: jsonb('warnings').$type<{ code: string; message: string }[]>().notNull().default([]),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     startedAt: timestamp('started_at', { withTimezone: true }),
@@ -72,9 +74,10 @@ export const pageMetrics = pgTable(
     primaryKey({ columns: [t.runId, t.pageId] }),
     index('page_metrics_rank_idx').on(t.runId, t.rank),
     index('page_metrics_path_idx').on(t.runId, t.path),
-    index('page_metrics_inbound_idx').on(t.runId, t.inboundCount),
-    index('page_metrics_outbound_idx').on(t.runId, t.outboundCount),
-    index('page_metrics_depth_idx').on(t.runId, t.depth),
+    // Rank as the last key makes every sort total (stable paging) and still served by the index alone.
+    index('page_metrics_inbound_idx').on(t.runId, t.inboundCount, t.rank),
+    index('page_metrics_outbound_idx').on(t.runId, t.outboundCount, t.rank),
+    index('page_metrics_depth_idx').on(t.runId, t.depth, t.rank),
   ],
 );
 

@@ -132,14 +132,16 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
 
   async status() {
     const lease = await this.leases.find(NIGHTLY);
+    // The baseline row of a new installation is not a run; do not show it as one.
+    const ran = Boolean(lease?.lastResult && !('baseline' in lease.lastResult));
     return {
       nightlyTime: this.config.nightlyTime,
       timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone,
       nextRunAt: this.nextRunAt().toISOString(),
       running: Boolean(lease?.leaseUntil && lease.leaseUntil.getTime() > Date.now()),
-      lastStartedAt: lease?.lastStartedAt?.toISOString() ?? null,
-      lastFinishedAt: lease?.lastFinishedAt?.toISOString() ?? null,
-      lastResult: lease?.lastResult ?? null,
+      lastStartedAt: ran || lease?.leaseUntil ? (lease?.lastStartedAt?.toISOString() ?? null) : null,
+      lastFinishedAt: ran ? (lease?.lastFinishedAt?.toISOString() ?? null) : null,
+      lastResult: ran ? lease!.lastResult : null,
       docSets: (await this.docSets.list()).map((d) => ({ id: d.id, name: d.name, nightly: d.settings.nightly, sourceFolder: d.settings.sourceFolder })),
     };
   }

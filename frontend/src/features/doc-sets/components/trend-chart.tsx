@@ -23,8 +23,10 @@ export function TrendChart({ runs }: { runs: Run[] | undefined }) {
       </Paper>
     );
   }
-  // One tick per run: a time scale would repeat a date when several runs fall on the same day.
-  const x = points.map((r) => new Date(r.finishedAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' }));
+  // One tick per run, keyed by position: runs finished in the same minute would share a date label and
+  // a point scale would fold them into one.
+  const dates = points.map((r) => new Date(r.finishedAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' }));
+  const x = points.map((_, i) => i);
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <Typography variant="h3" component="h2" sx={{ mb: 1 }}>Trends over {points.length} runs</Typography>
@@ -34,7 +36,7 @@ export function TrendChart({ runs }: { runs: Run[] | undefined }) {
         <ToggleButton value="size">Pages</ToggleButton>
       </ToggleButtonGroup>
       <LineChart height={260} colors={chartColors}
-        xAxis={[{ data: x, scaleType: 'point' }]}
+        xAxis={[{ data: x, scaleType: 'point', valueFormatter: (i: number) => `Run ${i + 1}, ${dates[i]}` }]}
         series={GROUPS[group].map((key) => ({
           data: points.map((r) => r.counts[key]),
           label: HEADLINES.find((h) => h.key === key)?.label ?? key,

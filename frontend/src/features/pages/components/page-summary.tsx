@@ -19,7 +19,16 @@ function Metric({ label, value, hint }: { label: string; value: string; hint?: s
 function frontMatterValue(value: unknown): string {
   if (value == null) return '';
   if (typeof value === 'string') return value;
+  if (Array.isArray(value) && value.every((v) => typeof v !== 'object')) return value.join(', ');
   return JSON.stringify(value);
+}
+
+/** The page's own front matter as written (`raw`), not the fields Linkloom derived from it. */
+function frontMatterEntries(frontMatter: PageDetail['frontMatter']): [string, unknown][] {
+  const fields = (frontMatter ?? {}) as Record<string, unknown>;
+  const raw = fields.raw;
+  const source = raw && typeof raw === 'object' && !Array.isArray(raw) ? (raw as Record<string, unknown>) : fields;
+  return Object.entries(source);
 }
 
 function headingText(h: NonNullable<PageDetail['headings']>[number]): string {
@@ -28,7 +37,7 @@ function headingText(h: NonNullable<PageDetail['headings']>[number]): string {
 
 /** Scores and counts as cards, then front matter and headings. */
 export function PageSummary({ page }: { page: PageDetail }) {
-  const frontMatter = Object.entries(page.frontMatter ?? {});
+  const frontMatter = frontMatterEntries(page.frontMatter);
   return (
     <Box sx={{ display: 'grid', gap: 2 }}>
       <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'repeat(auto-fill, minmax(160px, 1fr))' }}>

@@ -12,7 +12,7 @@ function runLink(result: NightlyDocSetResult): string {
 
 /** What the last nightly job did for each doc set. */
 export function LastResultTable({ result }: { result: NightlyResult | null }) {
-  if (!result || result.docSets.length === 0) {
+  if (!result || !result.docSets?.length) {
     return (
       <Paper variant="outlined">
         <EmptyState title={result ? 'The last nightly job had nothing to do' : 'No nightly job has run yet'}

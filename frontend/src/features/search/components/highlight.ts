@@ -1,9 +1,9 @@
 // Splits a server snippet on its match markers into plain segments, so the screen never parses server text
 // as HTML. Whatever else the snippet holds (tags, entities, script) stays literal text.
 
-/** The markers the search route puts around each match (chosen by Linkloom; see the search brief). */
-export const MATCH_OPEN = '<mark>';
-export const MATCH_CLOSE = '</mark>';
+/** The markers the search route puts around each match (the back end's ts_headline StartSel/StopSel). */
+export const MATCH_OPEN = '«';
+export const MATCH_CLOSE = '»';
 
 export interface Segment {
   text: string;

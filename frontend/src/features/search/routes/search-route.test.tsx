@@ -15,7 +15,7 @@ function api() {
       body: {
         items: [{
           path: 'brakes/bleeding.md', title: `Bleeding ${ATTACK} brakes`,
-          snippet: `Before you <mark>bleed</mark> the lines ${ATTACK} check the <mark>pads</mark>.`,
+          snippet: `Before you «bleed» the lines ${ATTACK} check the «pads».`,
           textRank: 0.42, stationaryScore: 0.031, score: 0.37, why: `Strong text match; linked from 9 pages (${url.searchParams.get('mode')})`,
         }],
         explanation: 'Ranked by text match and link score.', total: 1,
