@@ -5,6 +5,7 @@ import type { Role } from '@linkloom/shared';
 export function counts(overrides: Partial<RunCounts> = {}): RunCounts {
   return {
     pages: 120, links: 900, internalLinks: 700, externalLinks: 200, brokenLinks: 9, brokenAnchors: 3,
+    brokenAssets: 1, unsafeLinks: 0, ambiguousLinks: 0, redirectedLinks: 0, outOfScopeLinks: 0,
     orphans: 7, deadEnds: 4, unreachable: 2, deepPages: 5, islands: 1, ...overrides,
   };
 }

@@ -1,7 +1,7 @@
 // Types of the HTTP contract (/work/shared/API.md) as the front end reads them.
-import type { DocSetSettings, ListResult, Role } from '@linkloom/shared';
+import type { DocSetSettings, ListResult, Role, RunCounts } from '@linkloom/shared';
 
-export type { DocSetSettings, ListResult, Role };
+export type { DocSetSettings, ListResult, Role, RunCounts };
 
 export interface User {
   id: string;
@@ -19,19 +19,6 @@ export interface SignInResult {
   user: Pick<User, 'id' | 'email' | 'name' | 'role'>;
 }
 
-export interface RunCounts {
-  pages: number;
-  links: number;
-  internalLinks: number;
-  externalLinks: number;
-  brokenLinks: number;
-  brokenAnchors: number;
-  orphans: number;
-  deadEnds: number;
-  unreachable: number;
-  deepPages: number;
-  islands: number;
-}
 
 export type RunStatus = 'queued' | 'running' | 'finished' | 'failed';
 export type RunTrigger = 'import' | 'manual' | 'nightly';
@@ -85,22 +72,7 @@ export interface Snapshot {
   archiveSha256: string | null;
 }
 
-export interface PageItem {
-  path: string;
-  title: string;
-  stationaryScore: number;
-  timesAverage: number;
-  rank: number;
-  inboundCount: number;
-  outboundCount: number;
-  depth: number | null;
-  reachable: boolean;
-  orphan: boolean;
-  deadEnd: boolean;
-  island: boolean;
-  brokenLinkCount: number;
-  wordCount: number;
-}
+export type { RunPageItem as PageItem } from '@linkloom/shared';
 
 export interface ScoreDistribution {
   buckets: Array<{ fromRank: number; toRank: number; share: number }>;

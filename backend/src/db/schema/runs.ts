@@ -1,27 +1,10 @@
-import type { DocSetSettings } from '@linkloom/shared';
+import type { DocSetSettings, RunCounts } from '@linkloom/shared';
 import { bigint, boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { docSets } from './doc-sets.js';
 import { snapshots } from './snapshots.js';
 import { users } from './users.js';
 
-export interface RunCounts {
-  pages: number;
-  links: number;
-  internalLinks: number;
-  externalLinks: number;
-  brokenLinks: number;
-  brokenAnchors: number;
-  brokenAssets: number;
-  unsafeLinks: number;
-  ambiguousLinks: number;
-  redirectedLinks: number;
-  outOfScopeLinks: number;
-  orphans: number;
-  deadEnds: number;
-  unreachable: number;
-  deepPages: number;
-  islands: number;
-}
+export type { RunCounts } from '@linkloom/shared';
 
 /** One analysis of a snapshot with given settings; its results stay, so trends and diffs come from stored runs. */
 export const runs = pgTable(

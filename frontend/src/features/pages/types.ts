@@ -1,5 +1,5 @@
 // Shapes of the per-run page routes (API.md "Runs", extended by the page-explorer brief).
-import type { ListResult } from '@linkloom/shared';
+import type { ListResult, RunPageItem } from '@linkloom/shared';
 
 export type { ListResult };
 
@@ -7,23 +7,7 @@ export type { ListResult };
 export const PAGE_FLAGS = ['orphan', 'dead-end', 'unreachable', 'deep', 'island'] as const;
 export type PageFlag = (typeof PAGE_FLAGS)[number];
 
-export interface PageRow {
-  path: string;
-  title: string;
-  stationaryScore: number;
-  timesAverage: number;
-  rank: number;
-  inboundCount: number;
-  outboundCount: number;
-  depth: number | null;
-  reachable: boolean;
-  orphan: boolean;
-  deadEnd: boolean;
-  deep?: boolean;
-  island: boolean;
-  brokenLinkCount: number;
-  wordCount: number;
-}
+export type PageRow = RunPageItem;
 
 export interface LinkedPage {
   path: string;

@@ -1,22 +1,9 @@
-/** A page of a run as lists and the page detail show it. */
-export interface PageItem {
+import type { RunPageItem } from '@linkloom/shared';
+
+/** A page of a run as lists and the page detail show it: the contract plus the ids the back end keeps. */
+export interface PageItem extends RunPageItem {
   pageId: number;
-  path: string;
-  title: string;
-  stationaryScore: number;
-  timesAverage: number;
-  rank: number;
-  inboundCount: number;
-  outboundCount: number;
-  depth: number | null;
-  reachable: boolean;
-  orphan: boolean;
-  deadEnd: boolean;
-  deep: boolean;
-  island: boolean;
   islandId: number | null;
-  brokenLinkCount: number;
-  wordCount: number;
 }
 
 export const PAGE_ITEM_COLUMNS = `page_id as "pageId", path, title, stationary_score as "stationaryScore", times_average as "timesAverage", rank,

@@ -3,25 +3,9 @@ import { apiFetch } from '../../../lib/api-client.js';
 import { docSetQueryKey } from '../../doc-sets/api/get-doc-set.js';
 import { runPath } from './run-path.js';
 
-/** Every count the findings views show; older servers may send only the first eleven. */
-export interface RunFindingCounts {
-  pages: number;
-  links: number;
-  internalLinks: number;
-  externalLinks: number;
-  brokenLinks: number;
-  brokenAnchors: number;
-  brokenAssets?: number;
-  unsafeLinks?: number;
-  ambiguousLinks?: number;
-  redirectedLinks?: number;
-  outOfScopeLinks?: number;
-  orphans: number;
-  deadEnds: number;
-  unreachable: number;
-  deepPages: number;
-  islands: number;
-}
+import type { RunCounts } from '@linkloom/shared';
+
+export type RunFindingCounts = RunCounts;
 
 export interface AnalysisRun {
   id: string;

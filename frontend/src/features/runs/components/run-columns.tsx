@@ -12,7 +12,7 @@ export function runDuration(run: Pick<Run, 'startedAt' | 'finishedAt' | 'duratio
   return `${Math.floor(ms / 60_000)} min ${Math.round((ms % 60_000) / 1000)} s`;
 }
 
-const count = (key: keyof NonNullable<Run['counts']>, header: string): ColumnDef<Run, unknown> => ({
+const count = (key: keyof NonNullable<Run['counts']> & string, header: string): ColumnDef<Run, unknown> => ({
   id: key, header, enableSorting: false, meta: { align: 'right' },
   cell: ({ row }) => (row.original.counts ? nf.format(row.original.counts[key]) : '—'),
 });
