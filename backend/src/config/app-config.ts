@@ -26,6 +26,9 @@ export interface AppConfig {
   uploadMaxBytes: number;
   signInLimitPerMinute: number;
   importsPerHour: number;
+  /** Longest a whole import may take, and one page's parse (RELIABILITY 1.6 starting values, raised for big doc sets). */
+  importTimeoutSeconds: number;
+  pageParseTimeoutMs: number;
   logFormat: 'json' | 'text';
   logRequests: boolean;
   frontendDist: string | null;
@@ -112,6 +115,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     uploadMaxBytes: int(env, 'UPLOAD_MAX_BYTES', 50 * 1024 * 1024, problems, 1024),
     signInLimitPerMinute: int(env, 'SIGN_IN_LIMIT_PER_MINUTE', 5, problems, 1),
     importsPerHour: int(env, 'IMPORTS_PER_HOUR', 20, problems, 1),
+    importTimeoutSeconds: int(env, 'IMPORT_TIMEOUT_SECONDS', 900, problems, 10, 86_400),
+    pageParseTimeoutMs: int(env, 'PAGE_PARSE_TIMEOUT_MS', 2_000, problems, 100, 600_000),
     logFormat,
     logRequests: bool(env, 'LOG_REQUESTS', true, problems),
     frontendDist: null,

@@ -38,7 +38,15 @@ export const snapshots = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     finishedAt: timestamp('finished_at', { withTimezone: true }),
   },
-  (t) => [index('snapshots_doc_set_idx').on(t.docSetId, t.createdAt), index('snapshots_status_idx').on(t.status)],
+  (t) => [
+    index('snapshots_doc_set_idx').on(t.docSetId, t.createdAt),
+    index('snapshots_status_idx').on(t.status),
+    // One import at a time per doc set, decided by the database: a second insert while one runs fails.
+    uniqueIndex('snapshots_one_import_per_doc_set')
+      .on(t.docSetId)
+      .where(sql`status in ('received', 'importing')`),
+    index('snapshots_created_by_idx').on(t.createdBy, t.createdAt),
+  ],
 );
 
 /** A page of a snapshot with its parse results (kept so unchanged pages are not parsed again). */
