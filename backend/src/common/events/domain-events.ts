@@ -13,15 +13,21 @@ type Listener<K extends DomainEventName> = (payload: DomainEventMap[K]) => Promi
 @Injectable()
 export class DomainEvents {
   private readonly logger = new Logger('Events');
-  private readonly listeners = new Map<DomainEventName, Listener<never>[]>();
+  private readonly listeners = new Map<DomainEventName, { listener: Listener<never>; last: boolean }[]>();
 
-  on<K extends DomainEventName>(name: K, listener: Listener<K>): void {
-    this.listeners.set(name, [...(this.listeners.get(name) ?? []), listener as Listener<never>]);
+  /**
+   * `last: true` runs the listener after every other one, for work that must see their effects (the nightly
+   * job sends its digest only once tasks have been verified by the finished run).
+   */
+  on<K extends DomainEventName>(name: K, listener: Listener<K>, options: { last?: boolean } = {}): void {
+    const entry = { listener: listener as Listener<never>, last: options.last ?? false };
+    this.listeners.set(name, [...(this.listeners.get(name) ?? []), entry]);
   }
 
   /** Runs every listener; one listener's failure is logged and does not stop the others. */
   async emit<K extends DomainEventName>(name: K, payload: DomainEventMap[K]): Promise<void> {
-    for (const listener of this.listeners.get(name) ?? []) {
+    const entries = this.listeners.get(name) ?? [];
+    for (const { listener } of [...entries.filter((e) => !e.last), ...entries.filter((e) => e.last)]) {
       try {
         await (listener as Listener<K>)(payload);
       } catch (error) {

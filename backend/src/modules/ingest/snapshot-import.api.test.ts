@@ -112,7 +112,16 @@ describe('snapshot import pipeline', () => {
   it('61: five uploads at once give exactly one 202 and four 409 IMPORT_IN_PROGRESS; the accepted archive wins', async () => {
     const kit = await importKit(t, await createDocSet(t, {}, 'Race'));
     const zips = await Promise.all([1, 2, 3, 4, 5].map((n) => wellFormedZip({ [`v${n}/index.md`]: `# Version ${n}\n`, [`v${n}/only-${n}.md`]: `# Only ${n}\n` })));
+    // Hold the accepted import until every upload has been answered: a small archive could otherwise finish
+    // importing before the last request arrives, and a second import after it would rightly be accepted.
+    const executor = t.app.get(ImportExecutor);
+    const start = executor.start.bind(executor);
+    let release!: () => void;
+    const gate = new Promise<void>((resolve) => (release = resolve));
+    executor.start = (job) => gate.then(() => start(job));
     const responses = await Promise.all(zips.map((zip) => kit.upload(zip)));
+    executor.start = start;
+    release();
     const statuses = responses.map((r) => r.status).sort();
     expect(statuses).toEqual([202, 409, 409, 409, 409]);
     for (const r of responses.filter((x) => x.status === 409)) expect(r.body.code).toBe('IMPORT_IN_PROGRESS');

@@ -1,7 +1,6 @@
-import { Inject, Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { Inject, Injectable, Logger } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config.js';
 import type { AuthUser } from '../../common/auth.decorators.js';
-import { DomainEvents } from '../../common/events/domain-events.js';
 import { DocSetsService } from '../doc-sets/doc-sets.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { FindingsService } from '../runs/findings/findings.service.js';
@@ -29,16 +28,15 @@ function describe(item: Record<string, string>): string {
 }
 
 /**
- * After each nightly run: one digest per subscriber, with what appeared and disappeared since the run
+ * After each nightly run (the nightly job calls it once the run's other effects are done): one digest per subscriber, with what appeared and disappeared since the run
  * before, the largest score moves, tasks the run verified, overdue tasks and pruning decisions waiting.
  * Each digest's Message-ID is fixed per run and user, so sending it twice is harmless.
  */
 @Injectable()
-export class DigestService implements OnApplicationBootstrap {
+export class DigestService {
   private readonly logger = new Logger('Digest');
 
   constructor(
-    private readonly events: DomainEvents,
     private readonly runs: RunsService,
     private readonly findings: FindingsService,
     private readonly docSets: DocSetsService,
@@ -47,13 +45,6 @@ export class DigestService implements OnApplicationBootstrap {
     private readonly mail: MailService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
-
-  /** Registered last (after every module's onModuleInit), so task verification has run when the digest reads it. */
-  onApplicationBootstrap(): void {
-    this.events.on('run.finished', async ({ docSetId, runId, trigger }) => {
-      if (trigger === 'nightly') await this.sendForRun(docSetId, runId);
-    });
-  }
 
   async sendForRun(docSetId: string, runId: string): Promise<number> {
     const run = await this.runs.resolve(SYSTEM, docSetId, runId);

@@ -7,6 +7,7 @@ import { DomainEvents } from '../../common/events/domain-events.js';
 import { LifecycleService } from '../../common/lifecycle/lifecycle.service.js';
 import { DocSetsService } from '../doc-sets/doc-sets.service.js';
 import { IngestService } from '../ingest/ingest.service.js';
+import { DigestService } from '../notifications/digest.service.js';
 import { RunsService } from '../runs/runs.service.js';
 import { JobLeaseRepository } from './job-lease.repository.js';
 import { nextOccurrence, wasMissed } from './next-nightly.js';
@@ -38,6 +39,7 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
     private readonly leases: JobLeaseRepository,
     private readonly docSets: DocSetsService,
     private readonly runs: RunsService,
+    private readonly digest: DigestService,
     private readonly ingest: IngestService,
     private readonly events: DomainEvents,
     private readonly lifecycle: LifecycleService,
@@ -46,11 +48,13 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
   ) {}
 
   onModuleInit(): void {
+    // Last, so the finished run's other effects (task verification, pruning list) are in place before the digest.
+    const last = { last: true };
     this.events.on('run.finished', ({ docSetId, runId, trigger }) => {
       if (trigger === 'nightly') this.settle(docSetId, { ok: true, runId });
-    });
-    this.events.on('run.failed', ({ docSetId, runId, message }) => this.settle(docSetId, { ok: false, runId, message }));
-    this.events.on('snapshot.failed', ({ docSetId, message }) => this.settle(docSetId, { ok: false, message }));
+    }, last);
+    this.events.on('run.failed', ({ docSetId, runId, message }) => this.settle(docSetId, { ok: false, runId, message }), last);
+    this.events.on('snapshot.failed', ({ docSetId, message }) => this.settle(docSetId, { ok: false, message }), last);
   }
 
   async onApplicationBootstrap(): Promise<void> {
@@ -109,6 +113,9 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
       return { docSetId, name, action, outcome: 'failed', message: (error as Error).message };
     }
     const result = await done;
+    if (result.ok && result.runId) {
+      await this.digest.sendForRun(docSetId, result.runId).catch((error) => this.logger.error(`The digest of run ${result.runId} failed: ${String(error)}`));
+    }
     return { docSetId, name, action, outcome: result.ok ? 'finished' : 'failed', runId: result.runId, message: result.message };
   }
 
