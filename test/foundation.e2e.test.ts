@@ -1,3 +1,5 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext } from 'playwright-core';
 import { launchBrowser, screenshot, signIn } from './support/browser.js';
@@ -12,8 +14,11 @@ describe('the product, started as a user would start it', () => {
   });
   afterAll(async () => {
     await browser?.close();
-    const code = await server?.stop('SIGTERM');
-    expect(code).toBe(0);
+    const ended = await server?.stop('SIGTERM');
+    // Nest closes everything, then re-raises SIGTERM; a clean stop also removes the data-folder lock.
+    expect([0, 'SIGTERM']).toContain(ended);
+    expect(existsSync(join(server.dataDir, 'linkloom.lock'))).toBe(false);
+    expect(server.output()).not.toMatch(/Unhandled|Error:/);
     server?.cleanup();
   });
 

@@ -24,6 +24,9 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 }
 
 export async function signIn(page: Page, baseUrl: string, email: string, password = 'linkloom-demo'): Promise<void> {
+  // Browser tests share one browser profile: drop any earlier session so the sign-in form shows.
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.evaluate(() => window.localStorage.clear());
   await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel(/e-?mail/i).fill(email);
   await page.getByLabel(/password/i).fill(password);

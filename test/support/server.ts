@@ -13,7 +13,8 @@ export interface RunningServer {
   dataDir: string;
   process: ChildProcess;
   output: () => string;
-  stop(signal?: NodeJS.Signals): Promise<number | null>;
+  /** Resolves with the exit code, or with the signal's name when the process ended by re-raising it. */
+  stop(signal?: NodeJS.Signals): Promise<number | string | null>;
   cleanup(): void;
 }
 
@@ -56,9 +57,9 @@ export async function startServer(env: Record<string, string> = {}, options: { d
     throw new Error(`server did not answer within the time limit:\n${log}`);
   }
   const stop = (signal: NodeJS.Signals = 'SIGTERM') =>
-    new Promise<number | null>((resolve) => {
+    new Promise<number | string | null>((resolve) => {
       if (child.exitCode !== null) return resolve(child.exitCode);
-      child.once('exit', (code) => resolve(code));
+      child.once('exit', (code, by) => resolve(code ?? by));
       child.kill(signal);
     });
   return {

@@ -157,7 +157,8 @@ export async function apiDownload(path: string, query?: Query, fallbackName = 'e
   document.body.appendChild(anchor);
   anchor.click();
   anchor.remove();
-  URL.revokeObjectURL(url);
+  // Revoking at once can cancel the download before the browser has read the blob.
+  setTimeout(() => URL.revokeObjectURL(url), 60_000);
 }
 
 /** A sentence for any thrown value, for error panels and snackbars. */

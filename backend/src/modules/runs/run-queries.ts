@@ -89,7 +89,9 @@ export const searchQuerySchema = z
 export const diffQuerySchema = z.object({ against: z.union([z.literal('latest'), z.uuid()]) }).strict();
 
 export const EXPORT_VIEWS = ['pages', 'links', 'broken', 'orphans', 'dead-ends', 'unreachable', 'deep', 'islands'] as const;
-export const exportQuerySchema = z.object({ view: z.enum(EXPORT_VIEWS).default('pages') }).strict();
+/** A view plus, for page views, the page list's filters (so "export" gives the rows on screen); `sort` is accepted but rows stream by rank. */
+export const exportQuerySchema = pageListQuerySchema.omit({ page: true, pageSize: true }).extend({ view: z.enum(EXPORT_VIEWS).default('pages') }).strict();
+export type ExportQuery = z.infer<typeof exportQuerySchema>;
 
 export const startRunSchema = z.object({ settings: docSetSettingsPatchSchema.optional() }).strict();
 export type StartRunInput = z.infer<typeof startRunSchema>;

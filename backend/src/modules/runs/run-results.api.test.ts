@@ -136,4 +136,13 @@ describe('run results', () => {
     expect(broken).toHaveLength(5);
     expect((await read(t, `${base}/export.csv?view=secrets`)).status).toBe(400);
   });
+
+  it('exports exactly the rows the page list shows for the same filters', async () => {
+    const filters = 'flags=orphan,unreachable&q=swap&sort=-inboundCount';
+    const listed = (await read(t, `${base}/pages?${filters}&pageSize=500`)).body.items.map((p: { path: string }) => p.path).sort();
+    expect(listed.length).toBeGreaterThan(0);
+    const csv = (await read(t, `${base}/export.csv?view=pages&${filters}`)).text.trim().split('\r\n').slice(1);
+    expect(csv.map((line) => line.split(',')[0]).sort()).toEqual(listed);
+    expect((await read(t, `${base}/export.csv?view=pages&flags=nonsense`)).status).toBe(400);
+  });
 });

@@ -8,6 +8,7 @@ import { RunIdPipe } from './run-id.pipe.js';
 import {
   diffQuerySchema,
   exportQuerySchema,
+  type ExportQuery,
   islandsQuerySchema,
   linkListQuerySchema,
   pageDetailQuerySchema,
@@ -78,10 +79,11 @@ export class RunResultsController {
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
     @Param('runId', RunIdPipe) runId: string,
-    @Query(new ZodPipe(exportQuerySchema)) query: { view: ExportView },
+    @Query(new ZodPipe(exportQuerySchema)) query: ExportQuery,
     @Res() response: Response,
   ): Promise<void> {
-    const csv = await this.results.prepareExport({ actor, docSetId, runId }, query.view);
+    const { view, sort: _sort, ...filters } = query;
+    const csv = await this.results.prepareExport({ actor, docSetId, runId }, view, filters);
     response.status(200).set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': csv.contentDisposition, 'Cache-Control': 'no-store' });
     await csv.write(async (chunk) => {
       if (!response.write(chunk)) await once(response, 'drain');

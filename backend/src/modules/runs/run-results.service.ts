@@ -7,7 +7,7 @@ import { attachmentDisposition } from './export/csv.js';
 import { FindingsService } from './findings/findings.service.js';
 import { PageDetailService } from './pages/page-detail.service.js';
 import { publicPageItem } from './pages/page-item.js';
-import { PageListRepository } from './pages/page-list.repository.js';
+import { PageListRepository, type PageFilters } from './pages/page-list.repository.js';
 import type { LinkListQuery, PageListQuery } from './run-queries.js';
 import { RunsService } from './runs.service.js';
 import { SearchService } from './search/search.service.js';
@@ -67,13 +67,13 @@ export class RunResultsService {
   }
 
   /** Resolves everything that can fail before the first byte, so errors still get a JSON error body. */
-  async prepareExport(ref: RunRef, view: ExportView) {
+  async prepareExport(ref: RunRef, view: ExportView, filters: PageFilters) {
     const run = await this.run(ref);
     const docSet = await this.docSets.get(ref.docSetId);
     const fileName = `${docSet.name}-run-${run.id.slice(0, 8)}-${view}.csv`;
     return {
       contentDisposition: attachmentDisposition(fileName),
-      write: (sink: (chunk: string) => Promise<void>) => this.exports.write(run, view, sink),
+      write: (sink: (chunk: string) => Promise<void>) => this.exports.write(run, view, filters, sink),
     };
   }
 }

@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import { DbService } from '../../../db/db.service.js';
 import type { LinkRowView } from '../findings/findings.repository.js';
 import { PAGE_ITEM_COLUMNS, toPageItem, type PageItem } from '../pages/page-item.js';
+import { type PageFilters, whereClause } from '../pages/page-list.repository.js';
 import { pgArray, queryRows } from '../sql-values.js';
 
 /** Keyset-paged reads for exports: each chunk continues after the last key, so chunk 100 costs what chunk 1 does. */
@@ -10,10 +11,10 @@ import { pgArray, queryRows } from '../sql-values.js';
 export class ExportRepository {
   constructor(private readonly database: DbService) {}
 
-  async pagesAfterRank(runId: string, condition: string, afterRank: number, limit: number): Promise<PageItem[]> {
+  async pagesAfterRank(runId: string, condition: string, filters: PageFilters, afterRank: number, limit: number): Promise<PageItem[]> {
     const rows = await queryRows<PageItem>(
       this.database.db,
-      sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where run_id = ${runId} and rank > ${afterRank}::int and (${sql.raw(condition)})
+      sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where ${whereClause(runId, filters)} and rank > ${afterRank}::int and (${sql.raw(condition)})
           order by rank limit ${limit}`,
     );
     return rows.map(toPageItem);

@@ -4,6 +4,7 @@ import { toLinkItem } from '../findings/findings.service.js';
 import type { EXPORT_VIEWS } from '../run-queries.js';
 import { csvLine } from './csv.js';
 import { ExportRepository } from './export.repository.js';
+import type { PageFilters } from '../pages/page-list.repository.js';
 
 export type ExportView = (typeof EXPORT_VIEWS)[number];
 const CHUNK = 2_000;
@@ -24,16 +25,16 @@ const LINK_COLUMNS = ['sourcePath', 'line', 'column', 'hrefText', 'targetPath', 
 export class ExportService {
   constructor(private readonly repository: ExportRepository) {}
 
-  async write(run: RunRow, view: ExportView, sink: (chunk: string) => Promise<void>): Promise<void> {
+  async write(run: RunRow, view: ExportView, filters: PageFilters, sink: (chunk: string) => Promise<void>): Promise<void> {
     const condition = PAGE_VIEWS[view];
-    if (condition) return this.writePages(run, condition, sink);
+    if (condition) return this.writePages(run, condition, filters, sink);
     return this.writeLinks(run, view === 'broken' ? ['broken', 'broken-anchor'] : null, sink);
   }
 
-  private async writePages(run: RunRow, condition: string, sink: (chunk: string) => Promise<void>): Promise<void> {
+  private async writePages(run: RunRow, condition: string, filters: PageFilters, sink: (chunk: string) => Promise<void>): Promise<void> {
     await sink(csvLine(PAGE_COLUMNS));
     for (let after = 0; ; ) {
-      const rows = await this.repository.pagesAfterRank(run.id, condition, after, CHUNK);
+      const rows = await this.repository.pagesAfterRank(run.id, condition, filters, after, CHUNK);
       if (rows.length === 0) return;
       await sink(rows.map((row) => csvLine(PAGE_COLUMNS.map((c) => row[c]))).join(''));
       after = rows[rows.length - 1].rank;

@@ -44,7 +44,8 @@ export class PageListRepository {
   }
 }
 
-function whereClause(runId: string, query: Omit<PageListQuery, 'page' | 'pageSize'>): SQL {
+/** The filters of the page list as SQL; the CSV export applies the same ones. */
+export function whereClause(runId: string, query: PageFilters): SQL {
   const parts: SQL[] = [sql`run_id = ${runId}`];
   if (query.q) {
     const pattern = containsPattern(query.q);
@@ -58,6 +59,8 @@ function whereClause(runId: string, query: Omit<PageListQuery, 'page' | 'pageSiz
   if (query.maxDepth !== undefined) parts.push(sql`depth <= ${query.maxDepth}`);
   return sql.join(parts, sql` and `);
 }
+
+export type PageFilters = Omit<PageListQuery, 'page' | 'pageSize' | 'sort'>;
 
 function orderBy(sort: string): SQL {
   const descending = sort.startsWith('-');
