@@ -45,7 +45,8 @@ export async function createApp(config: AppConfig, options: { logger?: false } =
   app.use(requestContext(app.get(LifecycleService), config.logRequests));
   app.use('/api', express.json({ limit: '1mb' }));
   app.setGlobalPrefix('api');
-  app.enableShutdownHooks();
+  // Not SIGUSR2 (Nest's default list has it): that signal asks the running server for a backup.
+  app.enableShutdownHooks(['SIGTERM', 'SIGINT', 'SIGHUP']);
   mountApiDocs(app);
   mountFrontEnd(app, config);
   app.use(expressErrorHandler());
