@@ -1,4 +1,5 @@
 import type { Type } from '@nestjs/common';
+import { ApiTokensModule } from './modules/api-tokens/api-tokens.module.js';
 import { DocSetsModule } from './modules/doc-sets/doc-sets.module.js';
 import { IngestModule } from './modules/ingest/ingest.module.js';
 import { MailModule } from './modules/mail/mail.module.js';
@@ -10,4 +11,4 @@ import { LinkMapModule } from './modules/link-map/link-map.module.js';
 import { NightlyScheduleModule } from './modules/schedule/schedule.module.js';
 
 /** The product's capability modules (doc sets, imports, runs, work, mail...), listed once. */
-export const FEATURE_MODULES: Type[] = [MailModule, NotificationsModule, DocSetsModule, IngestModule, RunsModule, TasksModule, PruningModule, NightlyScheduleModule, LinkMapModule];
+export const FEATURE_MODULES: Type[] = [MailModule, NotificationsModule, DocSetsModule, IngestModule, RunsModule, TasksModule, PruningModule, NightlyScheduleModule, LinkMapModule, ApiTokensModule];

@@ -31,11 +31,21 @@ export class AuthGuard implements CanActivate {
     const request = context.switchToHttp().getRequest<Request & { user?: AuthUser }>();
     const user = await this.authenticate(request.headers.authorization);
     request.user = user;
+    if (user.apiTokenDocSetId) this.checkTokenScope(request, user.apiTokenDocSetId);
     const minRole = this.reflector.getAllAndOverride<Role | undefined>(MIN_ROLE, targets);
     if (minRole && !roleAtLeast(user.role, minRole)) {
       throw new AppError(403, 'FORBIDDEN', `This action needs the ${minRole} role or higher; you are signed in as ${user.role}.`);
     }
     return true;
+  }
+
+  /** A CI token may read its own doc set and push snapshots or start runs there; nothing else. */
+  private checkTokenScope(request: Request, docSetId: string): void {
+    const ownDocSet = request.params?.docSetId === docSetId;
+    const allowedWrite = request.method === 'POST' && /\/(snapshots|runs)$/.test(request.path);
+    if (!ownDocSet || (request.method !== 'GET' && !allowedWrite)) {
+      throw new AppError(403, 'FORBIDDEN', 'An API token may only read its own doc set, upload snapshots to it and start runs on it.');
+    }
   }
 
   private async authenticate(header: string | undefined): Promise<AuthUser> {

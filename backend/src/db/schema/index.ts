@@ -6,3 +6,4 @@ export * from './snapshots.js';
 export * from './runs.js';
 export * from './mail.js';
 export * from './work.js';
+export * from './api-tokens.js';

@@ -14,7 +14,7 @@ import { toSnapshotView, type SnapshotView } from './snapshot-view.js';
 import type { StoredUpload } from './upload/hashing-disk-storage.js';
 import { emptyUpload, missingFile } from './upload/upload-errors.js';
 
-type Actor = Pick<AuthUser, 'id' | 'role'>;
+type Actor = Pick<AuthUser, 'id' | 'role' | 'apiTokenDocSetId'>;
 
 /** Imports: check, decide, record the snapshot, then hand the work to the background executor. */
 @Injectable()
@@ -36,7 +36,7 @@ export class IngestService {
       if (upload.size === 0) throw emptyUpload();
       await this.checkQuota(actor);
       const plan = await this.inspect(() => inspectArchive(upload.path, inspectOptions(docSet.settings)));
-      const snapshot = await this.begin(docSet, plan, { source: 'upload', createdBy: actor.id, archiveSha256: upload.sha256, archiveBytes: upload.size });
+      const snapshot = await this.begin(docSet, plan, { source: actor.apiTokenDocSetId ? 'ci' : 'upload', createdBy: actor.id, archiveSha256: upload.sha256, archiveBytes: upload.size });
       this.executor.start({
         snapshot,
         docSet,

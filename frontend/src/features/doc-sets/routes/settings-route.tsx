@@ -21,6 +21,7 @@ export default function SettingsRoute() {
   const update = useUpdateDocSet(docSetId);
   const createRun = useCreateRun(docSetId);
   const canEdit = useRoleAtLeast('editor');
+  const canManageTokens = useRoleAtLeast('admin');
   const { notify } = useNotifier();
   const navigate = useNavigate();
   const [form, setForm] = useState<SettingsForm | null>(null);
@@ -70,7 +71,7 @@ export default function SettingsRoute() {
         <LinksSection {...fieldProps} />
         <FilesSection {...fieldProps} />
         <PruningSection {...fieldProps} />
-        {canEdit && <ApiTokensSection docSetId={docSetId} />}
+        {canManageTokens && <ApiTokensSection docSetId={docSetId} />}
       </Stack>
     </Box>
   );
