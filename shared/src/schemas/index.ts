@@ -4,3 +4,4 @@ export * from './common.js';
 export * from './users.js';
 export * from './doc-sets.js';
 export * from './runs.js';
+export * from './work.js';

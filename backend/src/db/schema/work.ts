@@ -1,16 +1,12 @@
+import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type PruningReason, type TaskFinding } from '@linkloom/shared';
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { docSets } from './doc-sets.js';
 import { users } from './users.js';
 
-/** What a task was made from: the broken hrefs with lines, or the suggested source pages with their gain. */
-export interface TaskFinding {
-  brokenLinks?: { href: string; line: number; status: string }[];
-  suggestedSources?: { path: string; title: string; scoreGain: number }[];
-  flags?: string[];
-}
+// The contract types live in shared/ (front and back end use them); re-exported for the schema's readers.
+export { TASK_KINDS, TASK_STATUSES, type PruningReason, type TaskFinding };
 
-export const TASK_KINDS = ['add-inbound-links', 'repair-broken-links', 'add-outbound-links', 'make-reachable', 'review-pruning', 'other'] as const;
-export const TASK_STATUSES = ['open', 'in-progress', 'done', 'wont-fix'] as const;
+
 
 /**
  * A fix task. Keyed to the page by doc set + path (not by page id), so it follows the page across snapshots.
@@ -27,7 +23,7 @@ export const tasks = pgTable(
     details: text('details').notNull().default(''),
     finding: jsonb('finding').$type<TaskFinding>().notNull().default({}),
     assigneeId: uuid('assignee_id').references(() => users.id, { onDelete: 'set null' }),
-    priority: text('priority', { enum: ['low', 'normal', 'high'] }).notNull().default('normal'),
+    priority: text('priority', { enum: TASK_PRIORITIES }).notNull().default('normal'),
     dueDate: text('due_date'),
     status: text('status', { enum: TASK_STATUSES }).notNull().default('open'),
     verification: text('verification', { enum: ['verified', 'flagged'] }),
@@ -68,10 +64,6 @@ export const pruningLists = pgTable('pruning_lists', {
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });
 
-export interface PruningReason {
-  rule: 'orphan' | 'unreachable' | 'low-score' | 'stale' | 'thin' | 'nominated';
-  detail: string;
-}
 
 /** The pages shown on the pruning list for the latest run (rule matches, nominations and decided pages). */
 export const pruningCandidates = pgTable(

@@ -1,19 +1,7 @@
-import type { PruningReason } from '../../db/schema/work.js';
+import type { PruningItem } from '@linkloom/shared';
 import type { CandidateWithDecision, NominationRow } from './pruning.repository.js';
 
-export interface PruningItem {
-  path: string;
-  title: string;
-  reasons: PruningReason[];
-  inLatestRun: boolean;
-  inboundCount: number | null;
-  stationaryScore: number | null;
-  wordCount: number | null;
-  reviewedAt: string | null;
-  firstProposedAt: string;
-  nominations: { by: string; reason: string; at: string }[];
-  decision: null | { decision: 'approve' | 'reject' | 'keep'; note: string; by: string; at: string; flagged: boolean; flagReason: string | null };
-}
+export type { PruningItem };
 
 export function toPruningItem(row: CandidateWithDecision, nominations: NominationRow[]): PruningItem {
   const d = row.decision;

@@ -1,34 +1,8 @@
+import type { TaskEventItem, TaskItem } from '@linkloom/shared';
 import type { TaskEventRow } from '../../db/schema/index.js';
 import type { TaskWithNames } from './tasks.repository.js';
 
-export interface TaskItem {
-  id: string;
-  docSetId: string;
-  docSetName: string | null;
-  pagePath: string;
-  kind: TaskWithNames['kind'];
-  title: string;
-  details: string;
-  finding: TaskWithNames['finding'];
-  assignee: { id: string; name: string; email: string } | null;
-  priority: TaskWithNames['priority'];
-  dueDate: string | null;
-  overdue: boolean;
-  status: TaskWithNames['status'];
-  verification: TaskWithNames['verification'];
-  verifiedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface TaskEventItem {
-  id: string;
-  type: 'comment' | 'change';
-  actor: { id: string | null; name: string };
-  body: string;
-  changes: Record<string, { from: unknown; to: unknown }>;
-  at: string;
-}
+export type { TaskEventItem, TaskItem };
 
 export const today = (now = new Date()): string => now.toISOString().slice(0, 10);
 

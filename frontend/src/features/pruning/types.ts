@@ -1,25 +1,9 @@
 // Shapes of the pruning API (API.md "Work").
-export type PruningDecision = 'approve' | 'reject' | 'keep';
+import type { PruningDecision, PruningItem, PruningReason } from '@linkloom/shared';
+
+export type { PruningDecision, PruningItem, PruningReason };
 export type PruningStatusFilter = '' | 'undecided' | 'approve' | 'reject' | 'keep' | 'flagged';
 
-export interface PruningReason {
-  rule: 'orphan' | 'unreachable' | 'low-score' | 'stale' | 'thin' | 'nominated';
-  detail: string;
-}
-
-export interface PruningItem {
-  path: string;
-  title: string;
-  reasons: PruningReason[];
-  inLatestRun: boolean;
-  inboundCount: number | null;
-  stationaryScore: number | null;
-  wordCount: number | null;
-  reviewedAt: string | null;
-  firstProposedAt: string;
-  nominations: { by: string; reason: string; at: string }[];
-  decision: null | { decision: PruningDecision; note: string; by: string; at: string; flagged: boolean; flagReason: string | null };
-}
 
 export interface PruningList {
   items: PruningItem[];

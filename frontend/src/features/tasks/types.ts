@@ -1,10 +1,10 @@
 // Shapes of the tasks API (API.md "Work"), as GET/POST /api/tasks answer them.
-export const TASK_KINDS = ['add-inbound-links', 'repair-broken-links', 'add-outbound-links', 'make-reachable', 'review-pruning', 'other'] as const;
-export const TASK_STATUSES = ['open', 'in-progress', 'done', 'wont-fix'] as const;
-export const PRIORITIES = ['low', 'normal', 'high'] as const;
-export type TaskKind = (typeof TASK_KINDS)[number];
-export type TaskStatus = (typeof TASK_STATUSES)[number];
-export type Priority = (typeof PRIORITIES)[number];
+import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type TaskEventItem, type TaskItem, type TaskKind, type TaskPriority, type TaskStatus } from '@linkloom/shared';
+
+export { TASK_KINDS, TASK_STATUSES };
+export type { TaskKind, TaskStatus };
+export const PRIORITIES = TASK_PRIORITIES;
+export type Priority = TaskPriority;
 
 export const KIND_LABELS: Record<TaskKind, string> = {
   'add-inbound-links': 'Add inbound links',
@@ -17,38 +17,8 @@ export const KIND_LABELS: Record<TaskKind, string> = {
 
 export const STATUS_LABELS: Record<TaskStatus, string> = { open: 'Open', 'in-progress': 'In progress', done: 'Done', 'wont-fix': 'Won’t fix' };
 
-export interface Task {
-  id: string;
-  docSetId: string;
-  docSetName: string | null;
-  pagePath: string;
-  kind: TaskKind;
-  title: string;
-  details: string;
-  finding: {
-    brokenLinks?: { href: string; line: number; status: string }[];
-    suggestedSources?: { path: string; title: string; scoreGain: number }[];
-    flags?: string[];
-  };
-  assignee: { id: string; name: string; email: string } | null;
-  priority: Priority;
-  dueDate: string | null;
-  overdue: boolean;
-  status: TaskStatus;
-  verification: 'verified' | 'flagged' | null;
-  verifiedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface TaskEvent {
-  id: string;
-  type: 'comment' | 'change';
-  actor: { id: string | null; name: string };
-  body: string;
-  changes: Record<string, { from: unknown; to: unknown }>;
-  at: string;
-}
+export type Task = TaskItem;
+export type TaskEvent = TaskEventItem;
 
 export interface TaskDetail extends Task {
   events: TaskEvent[];

@@ -3,6 +3,7 @@
  * links inside the section, the rest skewed towards a few popular pages (as real docs link to their setup
  * and reference pages), 2% of pages that nothing links to and 1% broken links. Seeded, so reproducible.
  */
+import { mulberry32 } from '../../demo/generator/prng.js';
 import type { FixtureLink, FixturePage } from './snapshot-writer.js';
 
 const SECTION_SIZE = 50;
@@ -37,14 +38,3 @@ export function syntheticLinkGraph(pageCount: number, linksPerPage: number, seed
   return { pages, links };
 }
 
-/** Mulberry32, a small 32-bit seeded generator (Tommy Ettinger, public domain); enough for test data. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
