@@ -6,8 +6,16 @@ import react from '@vitejs/plugin-react';
 // keeps components only lazily loaded screens use out of the first load (217 KiB gzipped vs 269 when grouped).
 const vendorGroups: Array<{ name: string; test: RegExp; priority: number }> = [
   { name: 'cytoscape', test: /node_modules[\\/]cytoscape/, priority: 40 },
-  { name: 'charts', test: /node_modules[\\/](@mui[\\/]x-charts|@mui[\\/]x-charts-vendor|@mui[\\/]x-internal|d3-|internmap|robust-predicates|flatqueue|bezier-easing)/, priority: 30 },
-  { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|cookie|set-cookie-parser)[\\/]/, priority: 20 },
+  {
+    name: 'charts',
+    test: /node_modules[\\/](@mui[\\/]x-charts|@mui[\\/]x-charts-vendor|@mui[\\/]x-internal|d3-|internmap|robust-predicates|flatqueue|bezier-easing)/,
+    priority: 30,
+  },
+  {
+    name: 'react',
+    test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|cookie|set-cookie-parser)[\\/]/,
+    priority: 20,
+  },
 ];
 
 export default defineConfig({

@@ -7,7 +7,12 @@ import { join, resolve } from 'node:path';
 const dataDir = resolve(process.env.DATA_DIR ?? './data');
 const folder = join(dataDir, 'backups');
 const lock = join(dataDir, 'linkloom.lock');
-const list = () => (existsSync(folder) ? readdirSync(folder).filter((f) => f.startsWith('linkloom-backup-')).sort() : []);
+const list = () =>
+  existsSync(folder)
+    ? readdirSync(folder)
+        .filter((f) => f.startsWith('linkloom-backup-'))
+        .sort()
+    : [];
 
 function runningPid() {
   if (!existsSync(lock)) return null;

@@ -10,7 +10,10 @@ import { ensureChromium } from '../test/support/chromium.mjs';
 const root = fileURLToPath(new URL('..', import.meta.url));
 const artifacts = join(root, 'test-artifacts');
 mkdirSync(artifacts, { recursive: true });
-const only = process.argv.find((a) => a.startsWith('--only='))?.slice(7).split(',');
+const only = process.argv
+  .find((a) => a.startsWith('--only='))
+  ?.slice(7)
+  .split(',');
 
 function run(command, args, options = {}) {
   const result = spawnSync(command, args, { cwd: root, stdio: 'inherit', ...options, env: { ...process.env, ...options.env } });
@@ -21,11 +24,18 @@ function vitest(label, cwd, extraArgs = [], env = {}) {
   const report = join(artifacts, `vitest-${label}.json`);
   rmSync(report, { force: true });
   console.log(`\n=== ${label} tests ===`);
-  const status = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extraArgs], { cwd: join(root, cwd), env });
+  const status = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extraArgs], {
+    cwd: join(root, cwd),
+    env,
+  });
   if (!existsSync(report)) return { label, passed: 0, failed: 1, note: `runner exited ${status} without a report` };
   const json = JSON.parse(readFileSync(report, 'utf8'));
   const failedFiles = (json.testResults ?? []).filter((f) => f.status === 'failed' && (f.assertionResults ?? []).length === 0).length;
-  return { label, passed: json.numPassedTests, failed: json.numFailedTests + failedFiles + (status !== 0 && json.numFailedTests === 0 && failedFiles === 0 ? 1 : 0) };
+  return {
+    label,
+    passed: json.numPassedTests,
+    failed: json.numFailedTests + failedFiles + (status !== 0 && json.numFailedTests === 0 && failedFiles === 0 ? 1 : 0),
+  };
 }
 
 const results = [];

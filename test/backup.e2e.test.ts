@@ -10,7 +10,11 @@ import { type RunningServer, startServer } from './support/server.js';
 const root = fileURLToPath(new URL('..', import.meta.url));
 
 function script(name: 'backup' | 'restore', dataDir: string, args: string[] = []) {
-  return spawnSync(process.execPath, [`scripts/${name}.mjs`, ...args], { cwd: root, env: { ...process.env, DATA_DIR: dataDir }, encoding: 'utf8' });
+  return spawnSync(process.execPath, [`scripts/${name}.mjs`, ...args], {
+    cwd: root,
+    env: { ...process.env, DATA_DIR: dataDir },
+    encoding: 'utf8',
+  });
 }
 
 describe('backup and restore of the embedded database (RELIABILITY check 72)', () => {

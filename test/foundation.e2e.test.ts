@@ -33,13 +33,31 @@ describe('the product, started as a user would start it', () => {
   it('signs in as the demo editor and shows the app shell with the demo notice', async () => {
     const page = await browser.newPage();
     await signIn(page, server.url, 'editor@demo.linkloom.test');
-    await expect.poll(() => page.getByText(/demo data/i).first().isVisible(), { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByText(/demo data/i)
+            .first()
+            .isVisible(),
+        { timeout: 20_000 },
+      )
+      .toBe(true);
     expect(await page.getByRole('button', { name: /Account menu for Edda Editor/ }).count()).toBe(1);
     expect(await page.evaluate(() => document.fonts.check('16px Roboto'))).toBe(true);
     await screenshot(page, 'foundation-shell-editor');
     // Editors have no user administration.
     await page.goto(`${server.url}/admin/users`);
-    await expect.poll(() => page.getByText(/not open to your role/i).first().isVisible(), { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByText(/not open to your role/i)
+            .first()
+            .isVisible(),
+        { timeout: 20_000 },
+      )
+      .toBe(true);
     await page.close();
   });
 

@@ -36,7 +36,7 @@ describe('every screen on the demo doc set, as each role', () => {
     server?.cleanup();
   });
 
-  it('shows the overview with the latest run\'s numbers (viewer: no upload button)', async () => {
+  it("shows the overview with the latest run's numbers (viewer: no upload button)", async () => {
     const page = await browser.newPage();
     await signIn(page, server.url, 'viewer@demo.linkloom.test');
     await page.goto(`${server.url}/doc-sets/${docSetId}`);
@@ -56,7 +56,11 @@ describe('every screen on the demo doc set, as each role', () => {
     await waitForPagerTotal(page, counts.pages);
     await screenshot(page, 'screen-page-explorer');
 
-    await page.getByRole('group', { name: 'Show only pages that are' }).getByText(/orphan/i).first().click();
+    await page
+      .getByRole('group', { name: 'Show only pages that are' })
+      .getByText(/orphan/i)
+      .first()
+      .click();
     await waitForPagerTotal(page, counts.orphans);
     expect(page.url()).toContain('flags=orphan');
     const orphanApi = await get(`/api/doc-sets/${docSetId}/runs/latest/pages?flags=orphan&pageSize=500`);
@@ -66,9 +70,16 @@ describe('every screen on the demo doc set, as each role', () => {
     await waitForPagerTotal(page, counts.pages);
     await page.getByRole('button', { name: /next page/i }).click();
     await expect.poll(() => page.url()).toContain('page=2');
-    await page.getByRole('columnheader', { name: /inbound/i }).getByRole('button').first().click();
+    await page
+      .getByRole('columnheader', { name: /inbound/i })
+      .getByRole('button')
+      .first()
+      .click();
     await expect.poll(() => page.url()).toMatch(/sort=-?inboundCount/);
-    const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.getByRole('button', { name: /export csv/i }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 60_000 }),
+      page.getByRole('button', { name: /export csv/i }).click(),
+    ]);
     expect(download.suggestedFilename()).toMatch(/\.csv$/);
     await page.close();
   });
@@ -79,7 +90,9 @@ describe('every screen on the demo doc set, as each role', () => {
     const top = (await get(`/api/doc-sets/${docSetId}/runs/latest/pages?sort=-stationaryScore&pageSize=1`)).items[0];
     await page.goto(`${server.url}/doc-sets/${docSetId}/page?path=${encodeURIComponent(top.path)}`);
     await expect.poll(() => page.getByText(top.title).first().isVisible(), { timeout: 60_000 }).toBe(true);
-    await expect.poll(() => page.locator('#neighbourhood-title, [aria-labelledby="neighbourhood-title"] canvas').count(), { timeout: 60_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.locator('#neighbourhood-title, [aria-labelledby="neighbourhood-title"] canvas').count(), { timeout: 60_000 })
+      .toBeGreaterThan(0);
     await screenshot(page, 'screen-page-detail');
     await page.close();
   });
@@ -123,7 +136,18 @@ describe('every screen on the demo doc set, as each role', () => {
       ['/', 'screen-doc-sets', /demo/i],
     ] as const) {
       await page.goto(`${server.url}${path}`);
-      await expect.poll(async () => text.test(await page.locator('main').innerText().catch(() => '')), { timeout: 60_000 }).toBe(true);
+      await expect
+        .poll(
+          async () =>
+            text.test(
+              await page
+                .locator('main')
+                .innerText()
+                .catch(() => ''),
+            ),
+          { timeout: 60_000 },
+        )
+        .toBe(true);
       await screenshot(page, name);
     }
     await page.close();

@@ -10,10 +10,16 @@ import { type RunningServer, startServer } from './support/server.js';
 
 const EDITOR = 'editor@demo.linkloom.test';
 const WRITER = 'writer@demo.linkloom.test';
-const FILLER = Array.from({ length: 12 }, (_, i) => `Shift lead ${i + 1} checks the quay log, confirms the berth plan with the tug desk and records weather notes before each vessel call.`).join(' ');
+const FILLER = Array.from(
+  { length: 12 },
+  (_, i) =>
+    `Shift lead ${i + 1} checks the quay log, confirms the berth plan with the tug desk and records weather notes before each vessel call.`,
+).join(' ');
 
 function handbook(cranesFixed: boolean): Record<string, string> {
-  const cranesLinks = cranesFixed ? '[Back to start](../index.md) and [berths](berths.md).' : '[Lockout steps](../safety/lockout.md), [torque table](torque.md) and [start](../index.md).';
+  const cranesLinks = cranesFixed
+    ? '[Back to start](../index.md) and [berths](berths.md).'
+    : '[Lockout steps](../safety/lockout.md), [torque table](torque.md) and [start](../index.md).';
   return {
     'index.md': `# Harbour operations\n\nSee [cranes](guide/cranes.md), [berths](guide/berths.md) and [tides](guide/tides.md).\n\n${FILLER}\n`,
     'guide/cranes.md': `---\nowner: ${WRITER}\n---\n# Crane maintenance\n\n${cranesLinks}\n\n${FILLER}\n`,
@@ -40,7 +46,10 @@ function zip(files: Record<string, string>): Promise<Buffer> {
   archive.end();
   const chunks: Buffer[] = [];
   return new Promise((resolve, reject) => {
-    archive.outputStream.on('data', (c: Buffer) => chunks.push(c)).on('end', () => resolve(Buffer.concat(chunks))).on('error', reject);
+    archive.outputStream
+      .on('data', (c: Buffer) => chunks.push(c))
+      .on('end', () => resolve(Buffer.concat(chunks)))
+      .on('error', reject);
   });
 }
 
@@ -50,11 +59,19 @@ describe('work on findings: tasks and the pruning list', () => {
   let token: string;
   let docSetId: string;
   const api = async (path: string, init: RequestInit = {}) => {
-    const response = await fetch(`${server.url}/api${path}`, { ...init, headers: { Authorization: `Bearer ${token}`, ...(init.body && typeof init.body === 'string' ? { 'Content-Type': 'application/json' } : {}), ...(init.headers ?? {}) } });
+    const response = await fetch(`${server.url}/api${path}`, {
+      ...init,
+      headers: {
+        Authorization: `Bearer ${token}`,
+        ...(init.body && typeof init.body === 'string' ? { 'Content-Type': 'application/json' } : {}),
+        ...(init.headers ?? {}),
+      },
+    });
     const text = await response.text();
     return { status: response.status, body: text ? JSON.parse(text) : undefined };
   };
-  const finishedRuns = async () => ((await api(`/doc-sets/${docSetId}/runs`)).body.items as { status: string }[]).filter((r) => r.status === 'finished').length;
+  const finishedRuns = async () =>
+    ((await api(`/doc-sets/${docSetId}/runs`)).body.items as { status: string }[]).filter((r) => r.status === 'finished').length;
   async function importArchive(cranesFixed: boolean) {
     const before = await finishedRuns();
     const form = new FormData();
@@ -74,7 +91,11 @@ describe('work on findings: tasks and the pruning list', () => {
   beforeAll(async () => {
     server = await startServer({ DEMO_CONTENT: 'false' });
     browser = await launchBrowser();
-    const signInResponse = await fetch(`${server.url}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: EDITOR, password: 'linkloom-demo' }) });
+    const signInResponse = await fetch(`${server.url}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: EDITOR, password: 'linkloom-demo' }),
+    });
     token = (await signInResponse.json()).accessToken;
     docSetId = (await api('/doc-sets', { method: 'POST', body: JSON.stringify({ name: 'Harbour Ops Handbook' }) })).body.id;
     await importArchive(false);
@@ -105,7 +126,13 @@ describe('work on findings: tasks and the pruning list', () => {
     await editor.goto(`${server.url}/tasks?view=all`);
     await editor.getByText('guide/old-ferry.md').first().waitFor();
     await screenshot(editor, 'work-tasks-all-editor');
-    const tasks = (await api(`/tasks?docSetId=${docSetId}`)).body.items as { id: string; pagePath: string; kind: string; details: string; assignee: { email: string } | null }[];
+    const tasks = (await api(`/tasks?docSetId=${docSetId}`)).body.items as {
+      id: string;
+      pagePath: string;
+      kind: string;
+      details: string;
+      assignee: { email: string } | null;
+    }[];
     const cranes = tasks.find((t) => t.pagePath === 'guide/cranes.md')!;
     expect(cranes.kind).toBe('repair-broken-links');
     expect(cranes.details).toContain('../safety/lockout.md');
@@ -151,7 +178,10 @@ describe('work on findings: tasks and the pruning list', () => {
     await editor.getByText(/2 pages: approved/).waitFor();
     await editor.getByRole('tab', { name: 'Approved' }).click();
     await editor.getByText('guide/pilot-notes.md').waitFor();
-    const [download] = await Promise.all([editor.waitForEvent('download'), editor.getByRole('button', { name: 'Export approved (CSV)' }).click()]);
+    const [download] = await Promise.all([
+      editor.waitForEvent('download'),
+      editor.getByRole('button', { name: 'Export approved (CSV)' }).click(),
+    ]);
     const csv = readFileSync((await download.path())!, 'utf8');
     expect(download.suggestedFilename()).toBe('pruning-approved-Harbour-Ops-Handbook.csv');
     expect(csv.split('\r\n')[0]).toBe('path,title,note,approvedBy,approvedAt,needsAnotherLook');

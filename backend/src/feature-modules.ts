@@ -11,4 +11,15 @@ import { LinkMapModule } from './modules/link-map/link-map.module.js';
 import { NightlyScheduleModule } from './modules/schedule/schedule.module.js';
 
 /** The product's capability modules (doc sets, imports, runs, work, mail...), listed once. */
-export const FEATURE_MODULES: Type[] = [MailModule, NotificationsModule, DocSetsModule, IngestModule, RunsModule, TasksModule, PruningModule, NightlyScheduleModule, LinkMapModule, ApiTokensModule];
+export const FEATURE_MODULES: Type[] = [
+  MailModule,
+  NotificationsModule,
+  DocSetsModule,
+  IngestModule,
+  RunsModule,
+  TasksModule,
+  PruningModule,
+  NightlyScheduleModule,
+  LinkMapModule,
+  ApiTokensModule,
+];

@@ -11,7 +11,9 @@ try {
   const app = await createApp(config);
   await app.listen(config.port, config.host);
   const url = await app.getUrl();
-  logger.log(`Linkloom is running at ${url.replace('[::1]', 'localhost').replace('127.0.0.1', 'localhost').replace('0.0.0.0', 'localhost')} (API docs at /api/docs)`);
+  logger.log(
+    `Linkloom is running at ${url.replace('[::1]', 'localhost').replace('127.0.0.1', 'localhost').replace('0.0.0.0', 'localhost')} (API docs at /api/docs)`,
+  );
 } catch (error) {
   const code = (error as { code?: string }).code;
   if (error instanceof ConfigError || code === 'DATA_DIR_LOCKED' || code === 'DATA_DIR_UNREADABLE') {

@@ -20,7 +20,9 @@ export function ensureChromium() {
   const command = 'apt-get update && apt-get install -y chromium';
   if (process.getuid?.() === 0) {
     console.log(`Chromium is missing; installing Debian's chromium for the browser tests: ${command}`);
-    const result = spawnSync('sh', ['-c', `${command.replace('apt-get install', 'DEBIAN_FRONTEND=noninteractive apt-get install')}`], { stdio: 'inherit' });
+    const result = spawnSync('sh', ['-c', `${command.replace('apt-get install', 'DEBIAN_FRONTEND=noninteractive apt-get install')}`], {
+      stdio: 'inherit',
+    });
     path = result.status === 0 ? find() : null;
     if (path) return { ok: true, path };
   }

@@ -25,7 +25,9 @@ export async function waitForDemo(baseUrl: string, timeoutMs = 420_000): Promise
       const runs = await get<{ items: { id: string; status: string }[] }>(`/api/doc-sets/${demo.id}/runs?pageSize=10`);
       const finished = runs.items.filter((r) => r.status === 'finished');
       const snapshots = await get<{ items: { status: string }[] }>(`/api/doc-sets/${demo.id}/snapshots`);
-      const busy = snapshots.items.some((s) => s.status === 'importing' || s.status === 'received') || runs.items.some((r) => r.status === 'queued' || r.status === 'running');
+      const busy =
+        snapshots.items.some((s) => s.status === 'importing' || s.status === 'received') ||
+        runs.items.some((r) => r.status === 'queued' || r.status === 'running');
       if (finished.length >= 3 && !busy) return { docSetId: demo.id, runId: finished[0].id };
     }
     if (Date.now() > deadline) throw new Error('the demo doc set was not ready in time');

@@ -29,7 +29,10 @@ export async function freePort(): Promise<number> {
 }
 
 /** Starts the built product (`npm start` does the same) on a free port with a fresh data folder. */
-export async function startServer(env: Record<string, string> = {}, options: { dataDir?: string; timeoutMs?: number } = {}): Promise<RunningServer> {
+export async function startServer(
+  env: Record<string, string> = {},
+  options: { dataDir?: string; timeoutMs?: number } = {},
+): Promise<RunningServer> {
   const port = await freePort();
   const dataDir = options.dataDir ?? mkdtempSync(join(tmpdir(), 'linkloom-e2e-'));
   let log = '';

@@ -45,25 +45,45 @@ interface Measurement {
   withinProductLimit?: boolean;
 }
 
-const { values: args } = parseArgs({ options: { zip: { type: 'string' }, settings: { type: 'string' }, pages: { type: 'string', default: '9960' }, 'import-timeout-s': { type: 'string', default: '900' } } });
+const { values: args } = parseArgs({
+  options: {
+    zip: { type: 'string' },
+    settings: { type: 'string' },
+    pages: { type: 'string', default: '9960' },
+    'import-timeout-s': { type: 'string', default: '900' },
+  },
+});
 const peak = trackPeakRss();
 const work = await mkdtemp(join(tmpdir(), 'linkloom-bench-'));
 try {
-  const settings = docSetSettingsSchema.parse({ ...defaultDocSetSettings(), ...(args.settings ? JSON.parse(args.settings) : args.zip ? {} : SYNTHETIC_SETTINGS) });
+  const settings = docSetSettingsSchema.parse({
+    ...defaultDocSetSettings(),
+    ...(args.settings ? JSON.parse(args.settings) : args.zip ? {} : SYNTHETIC_SETTINGS),
+  });
   const { full, changed } = await archives(work, args.zip, Number(args.pages));
   const floors = await measureFloors(full, settings);
-  console.log(`floors: unzip+read ${floors.unzipMs} ms, parse on one thread ${floors.parseMs} ms, ${(floors.pageBytes / 2 ** 20).toFixed(1)} MiB of pages`);
-  const app = await createApp(loadConfig({ DEMO: 'true', DEMO_CONTENT: 'false', LOG_REQUESTS: 'false', IMPORTS_PER_HOUR: '1000' }, { dataDir: join(work, 'data') }), { logger: false });
+  console.log(
+    `floors: unzip+read ${floors.unzipMs} ms, parse on one thread ${floors.parseMs} ms, ${(floors.pageBytes / 2 ** 20).toFixed(1)} MiB of pages`,
+  );
+  const app = await createApp(
+    loadConfig({ DEMO: 'true', DEMO_CONTENT: 'false', LOG_REQUESTS: 'false', IMPORTS_PER_HOUR: '1000' }, { dataDir: join(work, 'data') }),
+    { logger: false },
+  );
   try {
-    const docSet = await app.get(DocSetsService).create(
-      { id: null as unknown as string, email: 'bench', name: 'bench', role: 'admin' },
-      { name: 'Benchmark', description: '', settings },
-    );
+    const docSet = await app
+      .get(DocSetsService)
+      .create(
+        { id: null as unknown as string, email: 'bench', name: 'bench', role: 'admin' },
+        { name: 'Benchmark', description: '', settings },
+      );
     // The product stops an import at 120 s (RELIABILITY.md 1.6); the benchmark lifts that on its own app so a
     // slow run still yields figures, and reports whether the product limit would have been met.
     (app.get(INGEST_LIMITS) as IngestLimits).importTimeoutMs = Number(args['import-timeout-s']) * 1000;
     const results: Measurement[] = [];
-    for (const [label, zip] of [['full', full], ['incremental', changed]] as const) {
+    for (const [label, zip] of [
+      ['full', full],
+      ['incremental', changed],
+    ] as const) {
       if (!zip) continue;
       peak.reset();
       const snapshot = await importOnce(app, docSet.id, zip, work);
@@ -102,7 +122,9 @@ async function archives(dir: string, given: string | undefined, pages: number): 
   const base = { seed: 1, pages, targetBytes: pages * 5_400, linksPerPage: 30 };
   const summary = await writeSyntheticZip(base, full);
   await writeSyntheticZip({ ...base, changedFraction: 0.01, changeSeed: 7 }, changed);
-  console.log(`synthetic doc set: ${summary.pages} pages, ${summary.links} links written, ${(summary.uncompressedBytes / 2 ** 20).toFixed(1)} MiB, zip ${(summary.zipBytes / 2 ** 20).toFixed(1)} MiB`);
+  console.log(
+    `synthetic doc set: ${summary.pages} pages, ${summary.links} links written, ${(summary.uncompressedBytes / 2 ** 20).toFixed(1)} MiB, zip ${(summary.zipBytes / 2 ** 20).toFixed(1)} MiB`,
+  );
   return { full, changed };
 }
 
@@ -143,10 +165,12 @@ async function importOnce(app: Awaited<ReturnType<typeof createApp>>, docSetId: 
   while (!finished) {
     await new Promise((resolve) => setTimeout(resolve, 500));
     const { progress } = await ingest.get(docSetId, received.id);
-    if (pagesStoredMs === undefined && progress.total > 0 && progress.done >= progress.total) pagesStoredMs = Math.round(performance.now() - started);
+    if (pagesStoredMs === undefined && progress.total > 0 && progress.done >= progress.total)
+      pagesStoredMs = Math.round(performance.now() - started);
   }
   const snapshot = await ingest.get(docSetId, received.id);
-  if (snapshot.status !== 'ready') throw new Error(`import ${snapshot.status}: ${snapshot.errorCode} ${snapshot.error} (progress ${JSON.stringify(snapshot.progress)})`);
+  if (snapshot.status !== 'ready')
+    throw new Error(`import ${snapshot.status}: ${snapshot.errorCode} ${snapshot.error} (progress ${JSON.stringify(snapshot.progress)})`);
   return { ...snapshot, importMs: snapshot.importMs ?? 0, pagesStoredMs };
 }
 
@@ -176,11 +200,28 @@ function trackPeakRss() {
 function printTable(results: Measurement[], floors: { unzipMs: number; parseMs: number }) {
   const full = results.find((r) => r.label === 'full');
   const budget = full ? 1.5 * (floors.parseMs / full.workers + floors.unzipMs) : NaN;
-  console.table(results.map((r) => ({ label: r.label, pages: r.pages, links: r.links, 'import ms': r.importMs, 'pages/s': r.pagesPerSecond, 'MB/s': r.mbPerSecond, 'reused': r.reusedPages, 'peak RSS MB': r.rssMb })));
+  console.table(
+    results.map((r) => ({
+      label: r.label,
+      pages: r.pages,
+      links: r.links,
+      'import ms': r.importMs,
+      'pages/s': r.pagesPerSecond,
+      'MB/s': r.mbPerSecond,
+      reused: r.reusedPages,
+      'peak RSS MB': r.rssMb,
+    })),
+  );
   console.log(`floors: unzip+read ${floors.unzipMs} ms, parse on one thread ${floors.parseMs} ms`);
-  if (full) console.log(`target full <= 1.5 x (parse/${full.workers} + unzip) = ${Math.round(budget)} ms: ${full.importMs <= budget ? 'met' : 'MISSED'} (${full.importMs} ms)`);
+  if (full)
+    console.log(
+      `target full <= 1.5 x (parse/${full.workers} + unzip) = ${Math.round(budget)} ms: ${full.importMs <= budget ? 'met' : 'MISSED'} (${full.importMs} ms)`,
+    );
   const inc = results.find((r) => r.label === 'incremental');
-  if (full && inc) console.log(`target incremental < 10% of full = ${Math.round(full.importMs / 10)} ms: ${inc.importMs < full.importMs / 10 ? 'met' : 'MISSED'} (${inc.importMs} ms)`);
+  if (full && inc)
+    console.log(
+      `target incremental < 10% of full = ${Math.round(full.importMs / 10)} ms: ${inc.importMs < full.importMs / 10 ? 'met' : 'MISSED'} (${inc.importMs} ms)`,
+    );
   const maxRss = Math.max(...results.map((r) => r.rssMb));
   console.log(`target peak RSS < 1536 MB: ${maxRss < 1536 ? 'met' : 'MISSED'} (${maxRss} MB)`);
 }

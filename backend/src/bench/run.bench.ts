@@ -44,7 +44,10 @@ const ADMIN = { id: null as unknown as string, email: 'bench', name: 'bench', ro
 
 const work = await mkdtemp(join(tmpdir(), 'linkloom-run-bench-'));
 try {
-  const app = await createApp(loadConfig({ DEMO: 'true', DEMO_CONTENT: 'false', LOG_REQUESTS: 'false' }, { dataDir: join(work, 'data'), host: '127.0.0.1', port: 0 }), { logger: false });
+  const app = await createApp(
+    loadConfig({ DEMO: 'true', DEMO_CONTENT: 'false', LOG_REQUESTS: 'false' }, { dataDir: join(work, 'data'), host: '127.0.0.1', port: 0 }),
+    { logger: false },
+  );
   try {
     const pages = Number(args.pages);
     if (!args.skipSmall) await benchWholeRun(app, 'run-10k', pages, Math.round(Number(args.links) / pages));
@@ -69,12 +72,27 @@ async function benchWholeRun(app: INestApplication, label: string, pageCount: nu
   const wallMs = performance.now() - started;
   await app.get(RunsService).whenIdle(docSet.id);
   const phases = app.get(RunExecutor).lastPhases;
-  const [{ n }] = await queryRows<{ n: unknown }>(app.get(DbService).db, sql`select count(distinct target_page_id) as n from link_suggestions where run_id = ${run.id}`);
+  const [{ n }] = await queryRows<{ n: unknown }>(
+    app.get(DbService).db,
+    sql`select count(distinct target_page_id) as n from link_suggestions where run_id = ${run.id}`,
+  );
   const result = {
-    label, pages: pageCount, links: graph.links.length, status: finished.status, runDurationMs: finished.durationMs, wallMs: Math.round(wallMs),
-    pagesWithSuggestions: Number(n), needyPagesAsked: Math.min(200, (finished.counts?.orphans ?? 0) + (finished.counts?.unreachable ?? 0) + (finished.counts?.deepPages ?? 0)),
-    phasesMs: Object.fromEntries(Object.entries(phases).map(([k, v]) => [k, Math.round(v)])), iterations: finished.iterations,
-    snapshotWriteMs: Math.round(writeMs), rssMb: Math.round(process.memoryUsage().rss / 2 ** 20), targetMs: label === 'run-10k' ? 10_000 : undefined,
+    label,
+    pages: pageCount,
+    links: graph.links.length,
+    status: finished.status,
+    runDurationMs: finished.durationMs,
+    wallMs: Math.round(wallMs),
+    pagesWithSuggestions: Number(n),
+    needyPagesAsked: Math.min(
+      200,
+      (finished.counts?.orphans ?? 0) + (finished.counts?.unreachable ?? 0) + (finished.counts?.deepPages ?? 0),
+    ),
+    phasesMs: Object.fromEntries(Object.entries(phases).map(([k, v]) => [k, Math.round(v)])),
+    iterations: finished.iterations,
+    snapshotWriteMs: Math.round(writeMs),
+    rssMb: Math.round(process.memoryUsage().rss / 2 ** 20),
+    targetMs: label === 'run-10k' ? 10_000 : undefined,
   };
   console.log(`BENCH ${JSON.stringify(result)}`);
   return { docSetId: docSet.id, runId: run.id };
@@ -109,7 +127,11 @@ async function benchPageList(app: INestApplication, docSetId: string, clients: n
   await app.listen(0, '127.0.0.1');
   const url = await app.getUrl();
   const account = DEMO_ACCOUNTS.find((a) => a.role === 'viewer')!;
-  const signIn = await fetch(`${url}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: account.email, password: DEMO_PASSWORD }) });
+  const signIn = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: account.email, password: DEMO_PASSWORD }),
+  });
   const { accessToken } = (await signIn.json()) as { accessToken: string };
   const headers = { authorization: `Bearer ${accessToken}` };
   const latencies: number[] = [];
@@ -138,9 +160,28 @@ async function benchPageList(app: INestApplication, docSetId: string, clients: n
     return Math.round(sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] * 10) / 10;
   };
   const result = {
-    label: 'page-list-100k', clients, seconds: durationMs / 1000, requests: latencies.length, errors, requestsPerSecond: Math.round(latencies.length / (durationMs / 1000)),
-    p50Ms: at(0.5), p95Ms: at(0.95), p99Ms: at(0.99), maxMs: at(1), eventLoopP99Ms: Math.round(loopDelay.percentile(99) / 1e5) / 10, targetP95Ms: 100,
-    p95MsByRequest: Object.fromEntries([...byKind].sort((a, b) => a[0] - b[0]).map(([kind, values]) => [requestMix('…', kind).split('pageSize=50&')[1].replace(/&page=\d+/, ''), at(0.95, values)])),
+    label: 'page-list-100k',
+    clients,
+    seconds: durationMs / 1000,
+    requests: latencies.length,
+    errors,
+    requestsPerSecond: Math.round(latencies.length / (durationMs / 1000)),
+    p50Ms: at(0.5),
+    p95Ms: at(0.95),
+    p99Ms: at(0.99),
+    maxMs: at(1),
+    eventLoopP99Ms: Math.round(loopDelay.percentile(99) / 1e5) / 10,
+    targetP95Ms: 100,
+    p95MsByRequest: Object.fromEntries(
+      [...byKind]
+        .sort((a, b) => a[0] - b[0])
+        .map(([kind, values]) => [
+          requestMix('…', kind)
+            .split('pageSize=50&')[1]
+            .replace(/&page=\d+/, ''),
+          at(0.95, values),
+        ]),
+    ),
   };
   console.log(`BENCH ${JSON.stringify(result)}`);
 }

@@ -52,9 +52,7 @@ export class AuthGuard implements CanActivate {
     const match = /^Bearer ([^\s]{1,4096})$/.exec(header ?? '');
     if (!match) throw unauthenticated();
     const token = match[1];
-    const user = token.startsWith(API_TOKEN_PREFIX)
-      ? await this.apiTokens?.verify(token)
-      : await this.accessTokens.verify(token);
+    const user = token.startsWith(API_TOKEN_PREFIX) ? await this.apiTokens?.verify(token) : await this.accessTokens.verify(token);
     if (!user) throw unauthenticated();
     return user;
   }

@@ -16,13 +16,17 @@ describe('deny by default', () => {
   beforeAll(async () => {
     t = await createTestApp();
     const doc = (await t.http.get('/api/docs-json')).body as { paths: Record<string, Record<string, unknown>> };
-    routes = Object.entries(doc.paths).flatMap(([path, methods]) => Object.keys(methods).map((method) => ({ method: method.toUpperCase(), path })));
+    routes = Object.entries(doc.paths).flatMap(([path, methods]) =>
+      Object.keys(methods).map((method) => ({ method: method.toUpperCase(), path })),
+    );
   });
   afterAll(async () => t?.close());
 
-  it('lists the product\'s routes (so the checks below are not vacuous)', () => {
+  it("lists the product's routes (so the checks below are not vacuous)", () => {
     expect(routes.length).toBeGreaterThan(40);
-    expect(routes.map((r) => `${r.method} ${r.path}`)).toEqual(expect.arrayContaining([...PUBLIC, 'POST /api/doc-sets/{docSetId}/snapshots', 'GET /api/tasks']));
+    expect(routes.map((r) => `${r.method} ${r.path}`)).toEqual(
+      expect.arrayContaining([...PUBLIC, 'POST /api/doc-sets/{docSetId}/snapshots', 'GET /api/tasks']),
+    );
   });
 
   it('answers every non-public route with 401 when no token is sent', async () => {

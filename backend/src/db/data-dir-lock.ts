@@ -4,7 +4,10 @@ import { join } from 'node:path';
 /** Raised when another live process holds the data folder: two writers would corrupt PGlite's files. */
 export class DataDirLockedError extends Error {
   readonly code = 'DATA_DIR_LOCKED';
-  constructor(readonly dataDir: string, readonly pid: number) {
+  constructor(
+    readonly dataDir: string,
+    readonly pid: number,
+  ) {
     super(
       `DATA_DIR_LOCKED: the data folder ${dataDir} is in use by another Linkloom process (pid ${pid}). ` +
         `Stop that process first, or start this one with another DATA_DIR.`,

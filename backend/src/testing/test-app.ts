@@ -28,7 +28,14 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}, env: Nod
   const database = await createTestDatabase();
   const config = loadConfig(
     { DEMO: 'true', LOG_REQUESTS: 'false', ...env },
-    { dataDir, inMemoryDatabase: !database.url, databaseUrl: database.url, jwtSecret: 'test-secret-that-is-long-enough-0123456789', demoContent: false, ...overrides },
+    {
+      dataDir,
+      inMemoryDatabase: !database.url,
+      databaseUrl: database.url,
+      jwtSecret: 'test-secret-that-is-long-enough-0123456789',
+      demoContent: false,
+      ...overrides,
+    },
   );
   const app = await createApp(config, { logger: false });
   const server = app.getHttpServer();

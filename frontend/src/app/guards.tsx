@@ -19,7 +19,12 @@ export function RequireSession({ children }: { children: ReactNode }) {
 export function RequireRole({ minimum, children }: { minimum: Role; children: ReactNode }) {
   const allowed = useRoleAtLeast(minimum);
   if (!allowed) {
-    return <EmptyState title="This screen is not open to your role" hint={`It needs the ${minimum} role or higher. Ask an admin if you need it.`} />;
+    return (
+      <EmptyState
+        title="This screen is not open to your role"
+        hint={`It needs the ${minimum} role or higher. Ask an admin if you need it.`}
+      />
+    );
   }
   return <>{children}</>;
 }

@@ -15,7 +15,13 @@ function screen(path: string | undefined, load: () => Promise<ScreenModule>, min
     lazy: async () => {
       const { default: Screen } = await load();
       if (!minRole) return { Component: Screen };
-      return { Component: () => <RequireRole minimum={minRole}><Screen /></RequireRole> };
+      return {
+        Component: () => (
+          <RequireRole minimum={minRole}>
+            <Screen />
+          </RequireRole>
+        ),
+      };
     },
   } as RouteObject;
 }
@@ -24,7 +30,11 @@ export const routes: RouteObject[] = [
   screen('/sign-in', () => import('../features/auth/routes/sign-in-route.js')),
   {
     path: '/',
-    element: <RequireSession><AppShell /></RequireSession>,
+    element: (
+      <RequireSession>
+        <AppShell />
+      </RequireSession>
+    ),
     errorElement: <RouteErrorBoundary />,
     children: [
       screen(undefined, () => import('../features/doc-sets/routes/doc-sets-route.js')),

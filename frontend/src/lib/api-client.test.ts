@@ -2,13 +2,19 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ApiError, apiFetch, apiUrl, setUnauthorizedHandler } from './api-client.js';
 import { getSession, setSession } from './session.js';
 
-const session = { accessToken: 'tok-9', expiresAt: '2999-01-01T00:00:00Z', user: { id: 'u', email: 'a@b.test', name: 'A', role: 'viewer' as const } };
+const session = {
+  accessToken: 'tok-9',
+  expiresAt: '2999-01-01T00:00:00Z',
+  user: { id: 'u', email: 'a@b.test', name: 'A', role: 'viewer' as const },
+};
 
 afterEach(() => vi.unstubAllGlobals());
 
 describe('apiUrl', () => {
   it('prefixes /api once and drops empty query values', () => {
-    expect(apiUrl('/doc-sets', { page: 2, q: '', flags: ['orphan', 'deep'], x: undefined })).toBe('/api/doc-sets?page=2&flags=orphan%2Cdeep');
+    expect(apiUrl('/doc-sets', { page: 2, q: '', flags: ['orphan', 'deep'], x: undefined })).toBe(
+      '/api/doc-sets?page=2&flags=orphan%2Cdeep',
+    );
     expect(apiUrl('/api/health')).toBe('/api/health');
   });
 });
@@ -26,7 +32,13 @@ describe('apiFetch', () => {
   });
 
   it('turns the error body into an ApiError', async () => {
-    vi.stubGlobal('fetch', async () => new Response(JSON.stringify({ statusCode: 422, code: 'ARCHIVE_UNSAFE_PATH', message: 'Remove ../ paths', details: ['a'] }), { status: 422 }));
+    vi.stubGlobal(
+      'fetch',
+      async () =>
+        new Response(JSON.stringify({ statusCode: 422, code: 'ARCHIVE_UNSAFE_PATH', message: 'Remove ../ paths', details: ['a'] }), {
+          status: 422,
+        }),
+    );
     const error = await apiFetch('/x').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
     expect(error).toMatchObject({ status: 422, code: 'ARCHIVE_UNSAFE_PATH', message: 'Remove ../ paths', details: ['a'] });
@@ -43,7 +55,9 @@ describe('apiFetch', () => {
   });
 
   it('reports an unreachable server in words', async () => {
-    vi.stubGlobal('fetch', async () => { throw new TypeError('Failed to fetch'); });
+    vi.stubGlobal('fetch', async () => {
+      throw new TypeError('Failed to fetch');
+    });
     await expect(apiFetch('/x')).rejects.toMatchObject({ status: 0, code: 'NETWORK' });
   });
 });

@@ -18,10 +18,9 @@ interface RenderOptions {
 /** Renders a screen with theme, a fresh QueryClient (no retries), notifier and a memory router. */
 export function renderWithProviders(ui: ReactElement, options: RenderOptions = {}) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter(
-    [{ path: options.path ?? '*', element: ui }, ...(options.extraRoutes ?? [])],
-    { initialEntries: [options.route ?? '/'] },
-  );
+  const router = createMemoryRouter([{ path: options.path ?? '*', element: ui }, ...(options.extraRoutes ?? [])], {
+    initialEntries: [options.route ?? '/'],
+  });
   const result = render(
     <ThemeProvider theme={theme}>
       <QueryClientProvider client={queryClient}>

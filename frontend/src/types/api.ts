@@ -19,7 +19,6 @@ export interface SignInResult {
   user: Pick<User, 'id' | 'email' | 'name' | 'role'>;
 }
 
-
 export type RunStatus = 'queued' | 'running' | 'finished' | 'failed';
 export type RunTrigger = 'import' | 'manual' | 'nightly';
 

@@ -6,8 +6,18 @@ import { analyzeLinkGraph, type AnalyzeLinkGraphInput } from './analyze.js';
 //   iso-a <-> iso-b (an island), solo (no links at all), plus a broken link to a missing page.
 const pageIds = ['index', 'guide', 'api', 'ref', 'ref2', 'ref3', 'lonely', 'iso-a', 'iso-b', 'solo'];
 const edges: Array<[string, string]> = [
-  ['index', 'guide'], ['index', 'api'], ['guide', 'api'], ['api', 'ref'], ['ref', 'ref2'], ['ref2', 'ref3'],
-  ['lonely', 'index'], ['iso-a', 'iso-b'], ['iso-b', 'iso-a'], ['guide', 'api'], ['api', 'api'], ['ref3', 'gone'],
+  ['index', 'guide'],
+  ['index', 'api'],
+  ['guide', 'api'],
+  ['api', 'ref'],
+  ['ref', 'ref2'],
+  ['ref2', 'ref3'],
+  ['lonely', 'index'],
+  ['iso-a', 'iso-b'],
+  ['iso-b', 'iso-a'],
+  ['guide', 'api'],
+  ['api', 'api'],
+  ['ref3', 'gone'],
 ];
 const base: AnalyzeLinkGraphInput = { pageIds, edges, entryPages: ['index'], damping: 0.85, teleport: 'uniform', depthThreshold: 2 };
 const byId = (analysis: ReturnType<typeof analyzeLinkGraph>) => new Map(analysis.pages.map((p) => [p.pageId, p]));

@@ -109,7 +109,17 @@ export function analyzeLinkGraph(input: AnalyzeLinkGraphInput): LinkGraphAnalysi
     sccCount: strongComponents(graph).count,
   };
   const { iterations, residual, converged } = score;
-  const summary = { pageCount: n, edgeCount: graph.edgeCount, skippedLinks, entryPagesFound: entries.length, teleportUsed, iterations, residual, converged, counts } as const;
+  const summary = {
+    pageCount: n,
+    edgeCount: graph.edgeCount,
+    skippedLinks,
+    entryPagesFound: entries.length,
+    teleportUsed,
+    iterations,
+    residual,
+    converged,
+    counts,
+  } as const;
   return { pages, summary };
 }
 

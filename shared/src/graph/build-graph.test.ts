@@ -5,9 +5,10 @@ const row = (offsets: Int32Array, values: Int32Array, u: number) => Array.from(v
 
 describe('buildLinkGraph', () => {
   it('numbers pages in the given order, merges duplicate links and drops self-links', () => {
-    const { graph, indexOf, skippedLinks } = buildLinkGraph(['x', 'y', 'z'], [
-      ['x', 'z'], ['x', 'y'], ['x', 'z'], ['y', 'y'], { source: 'z', target: 'x' }, ['x', 'missing'],
-    ]);
+    const { graph, indexOf, skippedLinks } = buildLinkGraph(
+      ['x', 'y', 'z'],
+      [['x', 'z'], ['x', 'y'], ['x', 'z'], ['y', 'y'], { source: 'z', target: 'x' }, ['x', 'missing']],
+    );
     expect(indexOf.get('z')).toBe(2);
     expect(skippedLinks).toBe(1);
     expect(graph.edgeCount).toBe(3);
@@ -45,7 +46,10 @@ describe('buildGraphFromEdgePairs', () => {
       const targets = [...(expected.get(u) ?? [])].sort((a, b) => a - b);
       total += targets.length;
       expect(row(graph.outOffsets, graph.outTargets, u)).toEqual(targets);
-      const sources = [...expected.entries()].filter(([, set]) => set.has(u)).map(([s]) => s).sort((a, b) => a - b);
+      const sources = [...expected.entries()]
+        .filter(([, set]) => set.has(u))
+        .map(([s]) => s)
+        .sort((a, b) => a - b);
       expect(row(graph.inOffsets, graph.inSources, u)).toEqual(sources);
     }
     expect(graph.edgeCount).toBe(total);

@@ -16,9 +16,15 @@ export function checkAnchor(info: PageTargetInfo | undefined, target: string, fr
   }
   if (mode === 'wiki') {
     // Obsidian-style heading paths `#Part#Section` name the innermost heading last.
-    const heading = fragment.slice(fragment.lastIndexOf('#') + 1).trim().toLowerCase();
+    const heading = fragment
+      .slice(fragment.lastIndexOf('#') + 1)
+      .trim()
+      .toLowerCase();
     if (info.headings.some((h) => h.text.trim().toLowerCase() === heading || h.slug === heading)) return null;
-    const guess = closest(heading, info.headings.map((h) => h.text));
+    const guess = closest(
+      heading,
+      info.headings.map((h) => h.text),
+    );
     return `Heading "${fragment}" not found on ${target}${guess ? `; did you mean "${guess}"?` : '.'}`;
   }
   if (info.anchors.includes(fragment)) return null;

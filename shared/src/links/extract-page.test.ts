@@ -38,8 +38,14 @@ describe('extractPage', () => {
     const slugger = new GithubSlugger();
     const reference = ['Feeding schedule', 'Feeding schedule', 'Feeding schedule'].map((t) => slugger.slug(t));
     expect(facts.headings.map((h) => h.slug)).toEqual(reference);
-    expect(facts.headings.map((h) => [h.depth, h.text, h.line])).toEqual([[1, 'Feeding schedule', 1], [2, 'Feeding schedule', 12], [2, 'Feeding schedule', 13]]);
-    expect([...facts.anchors].sort()).toEqual(['feeding-schedule', 'feeding-schedule-1', 'feeding-schedule-2', 'old-anchor', 'raw-anchor', 'schedule'].sort());
+    expect(facts.headings.map((h) => [h.depth, h.text, h.line])).toEqual([
+      [1, 'Feeding schedule', 1],
+      [2, 'Feeding schedule', 12],
+      [2, 'Feeding schedule', 13],
+    ]);
+    expect([...facts.anchors].sort()).toEqual(
+      ['feeding-schedule', 'feeding-schedule-1', 'feeding-schedule-2', 'old-anchor', 'raw-anchor', 'schedule'].sort(),
+    );
   });
 
   test('block ids, title and text', () => {

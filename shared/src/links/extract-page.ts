@@ -91,7 +91,14 @@ function visitNode(state: PageState, node: Nodes): boolean | void {
       readHeading(state, node, at.line);
       return;
     case 'link':
-      state.links.add({ kind: linkKind(state, node), href: node.url, line: at.line, column: at.column, text: plainText(node), asset: false });
+      state.links.add({
+        kind: linkKind(state, node),
+        href: node.url,
+        line: at.line,
+        column: at.column,
+        text: plainText(node),
+        asset: false,
+      });
       return;
     case 'image':
       state.links.add({ kind: 'image', href: node.url, line: at.line, column: at.column, text: node.alt ?? '', asset: true });

@@ -6,9 +6,7 @@
 import { extensionOf, withoutExtension } from './page-paths.js';
 import type { TargetIndex } from './target-index.js';
 
-export type Lookup =
-  | { found: true; path: string; caseMismatch: boolean }
-  | { found: false; ambiguous: string[]; caseHint: string | null };
+export type Lookup = { found: true; path: string; caseMismatch: boolean } | { found: false; ambiguous: string[]; caseHint: string | null };
 
 export function candidatePaths(path: string, index: TargetIndex): string[] {
   const { extensions, indexFileNames } = index.settings;

@@ -43,10 +43,16 @@ export function emptyFrontMatter(): FrontMatter {
 export function frontMatterFields(data: Record<string, unknown>, warnings: PageWarning[]): FrontMatter {
   let aliases = asList(data['aliases'] ?? data['alias']);
   if (aliases.length > MAX_PAGE_ALIASES) {
-    warnings.push({ code: 'FRONT_MATTER_INVALID', line: 1, message: `More than ${MAX_PAGE_ALIASES} aliases; only the first ${MAX_PAGE_ALIASES} are used.` });
+    warnings.push({
+      code: 'FRONT_MATTER_INVALID',
+      line: 1,
+      message: `More than ${MAX_PAGE_ALIASES} aliases; only the first ${MAX_PAGE_ALIASES} are used.`,
+    });
     aliases = aliases.slice(0, MAX_PAGE_ALIASES);
   }
-  const tags = asList(data['tags'] ?? data['tag']).flatMap((t) => t.split(',').map((s) => s.trim())).filter(Boolean);
+  const tags = asList(data['tags'] ?? data['tag'])
+    .flatMap((t) => t.split(',').map((s) => s.trim()))
+    .filter(Boolean);
   const reviewed = DATE_KEYS.map((k) => isoDate(data[k])).find((d) => d !== undefined);
   const result: FrontMatter = {
     aliases,

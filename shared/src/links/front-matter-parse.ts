@@ -10,9 +10,7 @@ export const FRONT_MATTER_MAX_BYTES = 64 * 1024;
 export const FRONT_MATTER_MAX_ALIASES = 50;
 export const FRONT_MATTER_MAX_DEPTH = 20;
 
-export type FrontMatterResult =
-  | { ok: true; data: Record<string, unknown> }
-  | { ok: false; message: string; lineInBody?: number };
+export type FrontMatterResult = { ok: true; data: Record<string, unknown> } | { ok: false; message: string; lineInBody?: number };
 
 const FORBIDDEN_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 

@@ -97,13 +97,30 @@ describe('hostile front matter (checks 31-33)', () => {
 
 describe('front-matter fields', () => {
   test('YAML fields are read', () => {
-    const facts = extractPage('p.md', [
-      '---', 'title: Irrigation', 'aliases: [Watering, Drip lines]', 'owner: ana', 'tags: [garden, "water"]',
-      'last_reviewed: 2026-03-04', 'redirect_from: /old/irrigation/', 'linkloom:', '  protect: true', '---', '',
-    ].join('\n'));
+    const facts = extractPage(
+      'p.md',
+      [
+        '---',
+        'title: Irrigation',
+        'aliases: [Watering, Drip lines]',
+        'owner: ana',
+        'tags: [garden, "water"]',
+        'last_reviewed: 2026-03-04',
+        'redirect_from: /old/irrigation/',
+        'linkloom:',
+        '  protect: true',
+        '---',
+        '',
+      ].join('\n'),
+    );
     expect(facts.frontMatter).toMatchObject({
-      title: 'Irrigation', aliases: ['Watering', 'Drip lines'], owner: 'ana', tags: ['garden', 'water'],
-      reviewed: '2026-03-04', redirectFrom: ['/old/irrigation/'], protected: true,
+      title: 'Irrigation',
+      aliases: ['Watering', 'Drip lines'],
+      owner: 'ana',
+      tags: ['garden', 'water'],
+      reviewed: '2026-03-04',
+      redirectFrom: ['/old/irrigation/'],
+      protected: true,
     });
   });
   test('TOML dates become ISO dates; prune = false protects', () => {

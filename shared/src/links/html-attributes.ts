@@ -56,7 +56,13 @@ export function readHtml(html: string): HtmlFacts {
     if (href !== undefined) {
       const at = node.sourceCodeLocation ?? { startLine: 1, startCol: 1 };
       const tag = node.nodeName === 'a' ? 'a' : 'img';
-      facts.links.push({ tag, href, text: tag === 'a' ? textOf(node) : (attribute(node, 'alt') ?? ''), line: at.startLine, column: at.startCol });
+      facts.links.push({
+        tag,
+        href,
+        text: tag === 'a' ? textOf(node) : (attribute(node, 'alt') ?? ''),
+        line: at.startLine,
+        column: at.startCol,
+      });
     }
     const children = [...(node.childNodes ?? []), ...(node.content ? [node.content] : [])];
     for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]!);

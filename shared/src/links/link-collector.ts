@@ -31,7 +31,11 @@ export class LinkCollector {
       out.push({ code: 'LINK_LIMIT', message: `The page has more than ${MAX_LINKS_PER_PAGE} links; ${this.overCount} were dropped.` });
     }
     if (this.tooLong > 0) {
-      out.push({ code: 'LINK_LIMIT', line: this.firstTooLongLine, message: `${this.tooLong} link(s) longer than ${MAX_URL_LENGTH} characters were dropped.` });
+      out.push({
+        code: 'LINK_LIMIT',
+        line: this.firstTooLongLine,
+        message: `${this.tooLong} link(s) longer than ${MAX_URL_LENGTH} characters were dropped.`,
+      });
     }
     for (const line of this.backslashLines.slice(0, 20)) {
       out.push({ code: 'BACKSLASH_PATH', line, message: `The link on line ${line} uses "\\" as a folder separator; write "/" instead.` });

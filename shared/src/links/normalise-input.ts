@@ -71,12 +71,20 @@ export function applyParseBudgets(text: string, warnings: PageWarning[]): Prepar
     for (let i = block.start; i < block.end; i++) if (text[i] === '*' || text[i] === '_' || text[i] === '~') emphasis++;
     if (emphasis > EMPHASIS_BUDGET && !emphasisOff) {
       emphasisOff = true;
-      warnings.push({ code: 'PARSE_LIMIT', line: block.line, message: `The block at line ${block.line} has more than ${EMPHASIS_BUDGET} emphasis marks; emphasis was not read on this page (links were).` });
+      warnings.push({
+        code: 'PARSE_LIMIT',
+        line: block.line,
+        message: `The block at line ${block.line} has more than ${EMPHASIS_BUDGET} emphasis marks; emphasis was not read on this page (links were).`,
+      });
     }
     const lonely = unmatchedBrackets(text, block);
     if (lonely.length <= BRACKET_BUDGET) continue;
     for (const offset of lonely) blank.add(offset);
-    warnings.push({ code: 'PARSE_LIMIT', line: block.line, message: `The block at line ${block.line} has ${lonely.length} unpaired brackets; they were read as plain spaces.` });
+    warnings.push({
+      code: 'PARSE_LIMIT',
+      line: block.line,
+      message: `The block at line ${block.line} has ${lonely.length} unpaired brackets; they were read as plain spaces.`,
+    });
   }
   if (blank.size === 0) return { text, emphasisOff };
   const chars = text.split('');

@@ -38,9 +38,15 @@ export function isPagePath(path: string, settings: Pick<DocSetSettings, 'extensi
  */
 export function normalisePagePath(path: string): string | null {
   const slashed = path.normalize('NFC').replaceAll('\\', '/');
-  const collapsed = slashed.split('/').filter((s) => s !== '').join('/');
+  const collapsed = slashed
+    .split('/')
+    .filter((s) => s !== '')
+    .join('/');
   const { path: clean, aboveRoot } = removeDotSegments(collapsed);
-  const result = clean.split('/').filter((s) => s !== '').join('/');
+  const result = clean
+    .split('/')
+    .filter((s) => s !== '')
+    .join('/');
   return aboveRoot || result === '' ? null : result;
 }
 

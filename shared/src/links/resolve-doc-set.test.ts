@@ -15,7 +15,8 @@ describe.each(linkFixtures)('fixture doc set: $name', (fixture) => {
     const edges = new Set<string>();
     for (const l of result.links) {
       const isPage = l.targetPath !== null && !l.targetIsAsset;
-      if (isPage && (l.status === 'ok' || l.status === 'redirected') && l.targetPath !== l.sourcePath) edges.add(`${l.sourcePath} -> ${l.targetPath}`);
+      if (isPage && (l.status === 'ok' || l.status === 'redirected') && l.targetPath !== l.sourcePath)
+        edges.add(`${l.sourcePath} -> ${l.targetPath}`);
     }
     expect([...edges].sort()).toEqual(fixture.expected.edges.map(([a, b]) => `${a} -> ${b}`).sort());
   });
@@ -24,7 +25,9 @@ describe.each(linkFixtures)('fixture doc set: $name', (fixture) => {
     const problems = result.links.filter((l) => l.status === 'broken' || l.status === 'broken-anchor' || l.status === 'ambiguous');
     const seen = problems.map((l) => ({ source: l.sourcePath, href: l.href, status: l.status }));
     const key = (p: { source: string; href: string }) => p.source + ' ' + p.href;
-    expect(seen.sort((a, b) => key(a).localeCompare(key(b)))).toEqual([...fixture.expected.problems].sort((a, b) => key(a).localeCompare(key(b))));
+    expect(seen.sort((a, b) => key(a).localeCompare(key(b)))).toEqual(
+      [...fixture.expected.problems].sort((a, b) => key(a).localeCompare(key(b))),
+    );
     for (const p of problems) expect(p.reason).toMatch(/\S/);
   });
 });

@@ -6,7 +6,13 @@ import type { LinkKind, PageTargetInfo, RawLink } from './types.js';
 
 // Hand-drawn cases for DOMAIN.md "Links: how they resolve"; the rule number is named beside each check.
 const info = (title: string, extra: Partial<PageTargetInfo> = {}): PageTargetInfo => ({
-  title, aliases: [], anchors: [], headings: [], blockIds: [], redirectFrom: [], ...extra,
+  title,
+  aliases: [],
+  anchors: [],
+  headings: [],
+  blockIds: [],
+  redirectFrom: [],
+  ...extra,
 });
 const pages = new Map<string, PageTargetInfo>([
   ['guide/index.md', info('Guide')],
@@ -30,12 +36,25 @@ describe('Markdown links', () => {
   const r = resolverWith();
   test('rule 5: trailing slash tries the index file, then a page of that name', () => {
     expect(r.resolve('a.md', raw('guide/')).targetPath).toBe('guide/index.md');
-    const onlyPage = createLinkResolver({ pagePaths: ['guide.md'], assetPaths: [], pages: new Map(), settings: docSetSettingsSchema.parse({}) });
+    const onlyPage = createLinkResolver({
+      pagePaths: ['guide.md'],
+      assetPaths: [],
+      pages: new Map(),
+      settings: docSetSettingsSchema.parse({}),
+    });
     expect(onlyPage.resolve('a.md', raw('guide/')).targetPath).toBe('guide.md');
   });
   test('rule 5: .html maps to the Markdown source; backslashes read as / and flagged', () => {
-    expect(r.resolve('guide/index.md', raw('setup.html#install'))).toMatchObject({ status: 'ok', targetPath: 'guide/setup.md', anchor: 'install' });
-    expect(r.resolve('guide/deep/page.md', raw('..\\setup.md'))).toMatchObject({ status: 'ok', targetPath: 'guide/setup.md', flags: ['backslash'] });
+    expect(r.resolve('guide/index.md', raw('setup.html#install'))).toMatchObject({
+      status: 'ok',
+      targetPath: 'guide/setup.md',
+      anchor: 'install',
+    });
+    expect(r.resolve('guide/deep/page.md', raw('..\\setup.md'))).toMatchObject({
+      status: 'ok',
+      targetPath: 'guide/setup.md',
+      flags: ['backslash'],
+    });
   });
   test('rule 5: relative to the published URL (a/b.md served as a/b/)', () => {
     const published = resolverWith({ relativeTo: 'published-url' });
@@ -45,12 +64,19 @@ describe('Markdown links', () => {
   });
   test('rule 8: redirects from settings and from front matter', () => {
     const withList = resolverWith({ redirects: [{ from: '/old/setup/', to: '/guide/setup' }] });
-    expect(withList.resolve('a.md', raw('/old/setup/#install'))).toMatchObject({ status: 'redirected', targetPath: 'guide/setup.md', anchor: 'install' });
+    expect(withList.resolve('a.md', raw('/old/setup/#install'))).toMatchObject({
+      status: 'redirected',
+      targetPath: 'guide/setup.md',
+      anchor: 'install',
+    });
     expect(r.resolve('a.md', raw('/legacy/plan-b'))).toMatchObject({ status: 'redirected', targetPath: 'notes/plan b.md' });
   });
   test('rules 2 and 9: site base URL, same host outside it, other hosts', () => {
     const site = resolverWith({ siteBaseUrls: ['https://docs.example/handbook/'] });
-    expect(site.resolve('a.md', raw('https://docs.example/handbook/guide/setup#install'))).toMatchObject({ status: 'ok', targetPath: 'guide/setup.md' });
+    expect(site.resolve('a.md', raw('https://docs.example/handbook/guide/setup#install'))).toMatchObject({
+      status: 'ok',
+      targetPath: 'guide/setup.md',
+    });
     expect(site.resolve('a.md', raw('https://docs.example/blog/')).status).toBe('out-of-scope');
     expect(site.resolve('a.md', raw('//elsewhere.example/x')).status).toBe('external');
   });
@@ -79,7 +105,11 @@ describe('wiki links (rule 6)', () => {
     expect(r.resolve('notes/x.md', raw('Plan A#^gaol', 'wiki')).status).toBe('broken-anchor');
   });
   test('embeds of files are asset links', () => {
-    expect(r.resolve('x.md', raw('cat.png', 'wiki-embed', true))).toMatchObject({ status: 'ok', targetPath: 'img/cat.png', targetIsAsset: true });
+    expect(r.resolve('x.md', raw('cat.png', 'wiki-embed', true))).toMatchObject({
+      status: 'ok',
+      targetPath: 'img/cat.png',
+      targetIsAsset: true,
+    });
     expect(r.resolve('x.md', raw('dog.png', 'wiki-embed', true))).toMatchObject({ status: 'broken', targetIsAsset: true });
   });
 });

@@ -84,11 +84,13 @@ class Resolver implements LinkResolver {
     if (path === '') return this.finish(sourcePath, fragment, flags);
     if (path.startsWith('/')) {
       const inSite = stripSitePrefixes(path, this.index.settings);
-      if (inSite === null) return outcome('out-of-scope', { flags, reason: `${path} is outside this doc set's base path ${this.index.settings.basePath}.` });
+      if (inSite === null)
+        return outcome('out-of-scope', { flags, reason: `${path} is outside this doc set's base path ${this.index.settings.basePath}.` });
       return this.resolveSitePath(sourcePath, inSite, fragment, flags);
     }
     const merged = removeDotSegments(mergePaths('/' + baseFolder(sourcePath, this.index.settings), path));
-    if (merged.aboveRoot) return outcome('broken', { flags, reason: `${reference} climbs above the doc set's root: the target is outside the doc set.` });
+    if (merged.aboveRoot)
+      return outcome('broken', { flags, reason: `${reference} climbs above the doc set's root: the target is outside the doc set.` });
     return this.lookup(sourcePath, merged.path.slice(1), fragment, flags);
   }
 
@@ -105,7 +107,11 @@ class Resolver implements LinkResolver {
       return this.finish(found.path, fragment, flags, hops > 0 ? 'redirected' : 'ok');
     }
     if (found.ambiguous.length > 0) {
-      return outcome('ambiguous', { flags, candidates: found.ambiguous, reason: `${path} matches ${found.ambiguous.length} files that differ only in letter case: ${found.ambiguous.join(', ')}.` });
+      return outcome('ambiguous', {
+        flags,
+        candidates: found.ambiguous,
+        reason: `${path} matches ${found.ambiguous.length} files that differ only in letter case: ${found.ambiguous.join(', ')}.`,
+      });
     }
     const redirect = this.redirects.get(redirectKey(path, this.index.settings));
     if (redirect && hops < MAX_REDIRECT_HOPS) {
@@ -120,7 +126,11 @@ class Resolver implements LinkResolver {
     const what = asset ? 'file' : 'page';
     if (caseHint) {
       flags.push('case-mismatch');
-      return outcome('broken', { flags, targetIsAsset: asset, reason: `No ${what} ${path}; did you mean ${caseHint}? Only the letter case differs.` });
+      return outcome('broken', {
+        flags,
+        targetIsAsset: asset,
+        reason: `No ${what} ${path}; did you mean ${caseHint}? Only the letter case differs.`,
+      });
     }
     const folder = path.slice(0, path.lastIndexOf('/') + 1);
     const guess = closest(path, this.index.byFolder.get(folder) ?? []);

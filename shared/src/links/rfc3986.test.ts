@@ -9,19 +9,50 @@ const base = { path: '/b/c/d;p', query: 'q' };
 // Section 5.4.1 "Normal Examples". Left out, with reason: "g:h" (has a scheme) and "//g" (has an authority):
 // our resolver classifies those before path resolution (scheme -> external/unsafe, `//host` -> external).
 const normal: [string, string][] = [
-  ['g', '/b/c/g'], ['./g', '/b/c/g'], ['g/', '/b/c/g/'], ['/g', '/g'], ['?y', '/b/c/d;p?y'], ['g?y', '/b/c/g?y'],
-  ['#s', '/b/c/d;p?q#s'], ['g#s', '/b/c/g#s'], ['g?y#s', '/b/c/g?y#s'], [';x', '/b/c/;x'], ['g;x', '/b/c/g;x'],
-  ['g;x?y#s', '/b/c/g;x?y#s'], ['', '/b/c/d;p?q'], ['.', '/b/c/'], ['./', '/b/c/'], ['..', '/b/'], ['../', '/b/'],
-  ['../g', '/b/g'], ['../..', '/'], ['../../', '/'], ['../../g', '/g'],
+  ['g', '/b/c/g'],
+  ['./g', '/b/c/g'],
+  ['g/', '/b/c/g/'],
+  ['/g', '/g'],
+  ['?y', '/b/c/d;p?y'],
+  ['g?y', '/b/c/g?y'],
+  ['#s', '/b/c/d;p?q#s'],
+  ['g#s', '/b/c/g#s'],
+  ['g?y#s', '/b/c/g?y#s'],
+  [';x', '/b/c/;x'],
+  ['g;x', '/b/c/g;x'],
+  ['g;x?y#s', '/b/c/g;x?y#s'],
+  ['', '/b/c/d;p?q'],
+  ['.', '/b/c/'],
+  ['./', '/b/c/'],
+  ['..', '/b/'],
+  ['../', '/b/'],
+  ['../g', '/b/g'],
+  ['../..', '/'],
+  ['../../', '/'],
+  ['../../g', '/g'],
 ];
 
 // Section 5.4.2 "Abnormal Examples". Left out, with reason: "http:g" (has a scheme; the RFC's strict
 // parser result is "http:g" and our resolver treats any scheme before path resolution).
 const abnormal: [string, string][] = [
-  ['../../../g', '/g'], ['../../../../g', '/g'], ['/./g', '/g'], ['/../g', '/g'], ['g.', '/b/c/g.'], ['.g', '/b/c/.g'],
-  ['g..', '/b/c/g..'], ['..g', '/b/c/..g'], ['./../g', '/b/g'], ['./g/.', '/b/c/g/'], ['g/./h', '/b/c/g/h'],
-  ['g/../h', '/b/c/h'], ['g;x=1/./y', '/b/c/g;x=1/y'], ['g;x=1/../y', '/b/c/y'], ['g?y/./x', '/b/c/g?y/./x'],
-  ['g?y/../x', '/b/c/g?y/../x'], ['g#s/./x', '/b/c/g#s/./x'], ['g#s/../x', '/b/c/g#s/../x'],
+  ['../../../g', '/g'],
+  ['../../../../g', '/g'],
+  ['/./g', '/g'],
+  ['/../g', '/g'],
+  ['g.', '/b/c/g.'],
+  ['.g', '/b/c/.g'],
+  ['g..', '/b/c/g..'],
+  ['..g', '/b/c/..g'],
+  ['./../g', '/b/g'],
+  ['./g/.', '/b/c/g/'],
+  ['g/./h', '/b/c/g/h'],
+  ['g/../h', '/b/c/h'],
+  ['g;x=1/./y', '/b/c/g;x=1/y'],
+  ['g;x=1/../y', '/b/c/y'],
+  ['g?y/./x', '/b/c/g?y/./x'],
+  ['g?y/../x', '/b/c/g?y/../x'],
+  ['g#s/./x', '/b/c/g#s/./x'],
+  ['g#s/../x', '/b/c/g#s/../x'],
 ];
 
 describe('RFC 3986 section 5.4 reference resolution, adapted to paths', () => {

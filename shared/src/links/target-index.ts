@@ -25,7 +25,12 @@ export class TargetIndex {
   readonly byFolder = new Map<string, string[]>();
   readonly pageInfo: (path: string) => PageTargetInfo | undefined;
 
-  constructor(pagePaths: string[], assetPaths: string[], pages: PagesSource, readonly settings: DocSetSettings) {
+  constructor(
+    pagePaths: string[],
+    assetPaths: string[],
+    pages: PagesSource,
+    readonly settings: DocSetSettings,
+  ) {
     this.pageInfo = typeof pages === 'function' ? pages : (path) => pages.get(path);
     for (const path of assetPaths) this.addFile(path, 'asset', path.toLowerCase(), this.assetSuffixes);
     for (const path of pagePaths) this.addFile(path, 'page', withoutExtension(path).toLowerCase(), this.pageSuffixes);

@@ -18,12 +18,7 @@ export interface Heading {
   line: number;
 }
 
-export type PageWarningCode =
-  | 'FRONT_MATTER_INVALID'
-  | 'LINK_LIMIT'
-  | 'BACKSLASH_PATH'
-  | 'PARSE_LIMIT'
-  | 'PARSE_DEPTH';
+export type PageWarningCode = 'FRONT_MATTER_INVALID' | 'LINK_LIMIT' | 'BACKSLASH_PATH' | 'PARSE_LIMIT' | 'PARSE_DEPTH';
 
 export interface PageWarning {
   code: PageWarningCode;
@@ -57,15 +52,7 @@ export interface PageFacts {
   links: RawLink[];
 }
 
-export type LinkStatus =
-  | 'ok'
-  | 'broken'
-  | 'broken-anchor'
-  | 'unsafe'
-  | 'external'
-  | 'ambiguous'
-  | 'redirected'
-  | 'out-of-scope';
+export type LinkStatus = 'ok' | 'broken' | 'broken-anchor' | 'unsafe' | 'external' | 'ambiguous' | 'redirected' | 'out-of-scope';
 
 export interface ResolvedLink {
   sourcePath: string;

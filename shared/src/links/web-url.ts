@@ -7,9 +7,7 @@ import type { DocSetSettings } from '../schemas/doc-set-settings.js';
 import { stripSitePrefixes } from './redirects.js';
 
 export type WebUrlClass =
-  | { type: 'internal'; path: string; fragment: string | null }
-  | { type: 'external' }
-  | { type: 'out-of-scope'; reason: string };
+  { type: 'internal'; path: string; fragment: string | null } | { type: 'external' } | { type: 'out-of-scope'; reason: string };
 
 function decodeOrKeep(text: string): string {
   try {

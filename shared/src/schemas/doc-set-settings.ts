@@ -1,7 +1,12 @@
 import { z } from 'zod';
 
 const pagePath = z.string().trim().min(1).max(512);
-const url = z.string().trim().url().max(2048).refine((u) => /^https?:\/\//i.test(u), 'must start with http:// or https://');
+const url = z
+  .string()
+  .trim()
+  .url()
+  .max(2048)
+  .refine((u) => /^https?:\/\//i.test(u), 'must start with http:// or https://');
 
 export const redirectSchema = z.object({ from: pagePath, to: pagePath }).strict();
 
@@ -19,10 +24,28 @@ const pruningShape = {
 const settingsShape = {
   entryPages: z.array(pagePath).max(200),
   siteBaseUrls: z.array(url).max(20),
-  basePath: z.string().trim().max(256).regex(/^(\/\S*)?$/, 'must be empty or start with /'),
-  localePrefix: z.string().trim().min(1).max(32).regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, - and _ only').nullable(),
+  basePath: z
+    .string()
+    .trim()
+    .max(256)
+    .regex(/^(\/\S*)?$/, 'must be empty or start with /'),
+  localePrefix: z
+    .string()
+    .trim()
+    .min(1)
+    .max(32)
+    .regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, - and _ only')
+    .nullable(),
   indexFileNames: z.array(z.string().trim().min(1).max(128)).min(1).max(20),
-  extensions: z.array(z.string().trim().regex(/^\.[A-Za-z0-9]+$/, 'like .md')).min(1).max(10),
+  extensions: z
+    .array(
+      z
+        .string()
+        .trim()
+        .regex(/^\.[A-Za-z0-9]+$/, 'like .md'),
+    )
+    .min(1)
+    .max(10),
   caseInsensitive: z.boolean(),
   wikiLinks: z.boolean(),
   ignore: z.array(z.string().trim().min(1).max(256)).max(100),
@@ -64,10 +87,13 @@ export const docSetSettingsSchema = z
   .object(settingsShape)
   .partial()
   .strict()
-  .transform((given) => ({
-    ...structuredClone(DEFAULT_DOC_SET_SETTINGS),
-    ...Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)),
-  }) as typeof DEFAULT_DOC_SET_SETTINGS);
+  .transform(
+    (given) =>
+      ({
+        ...structuredClone(DEFAULT_DOC_SET_SETTINGS),
+        ...Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)),
+      }) as typeof DEFAULT_DOC_SET_SETTINGS,
+  );
 
 export type DocSetSettings = typeof DEFAULT_DOC_SET_SETTINGS;
 

@@ -7,9 +7,32 @@ import { roleSchema, type Role } from './roles.js';
  * complete breach corpus.
  */
 const COMMON_PASSWORDS = new Set([
-  'password', 'password1', 'password123', '12345678', '123456789', '1234567890', 'qwertyuiop', 'qwerty123',
-  'iloveyou', 'sunshine', 'princess', 'football', 'baseball', 'welcome1', 'admin123', 'letmein1', 'trustno1',
-  'passw0rd', 'abc12345', '11111111', '00000000', 'superman', 'starwars', 'whatever', 'qwertyui', 'linkloom',
+  'password',
+  'password1',
+  'password123',
+  '12345678',
+  '123456789',
+  '1234567890',
+  'qwertyuiop',
+  'qwerty123',
+  'iloveyou',
+  'sunshine',
+  'princess',
+  'football',
+  'baseball',
+  'welcome1',
+  'admin123',
+  'letmein1',
+  'trustno1',
+  'passw0rd',
+  'abc12345',
+  '11111111',
+  '00000000',
+  'superman',
+  'starwars',
+  'whatever',
+  'qwertyui',
+  'linkloom',
 ]);
 
 export const passwordSchema = z
@@ -20,7 +43,9 @@ export const passwordSchema = z
 
 export const emailSchema = z.string().trim().toLowerCase().max(254).email('must be an e-mail address');
 
-export const signInSchema = z.object({ email: z.string().trim().toLowerCase().min(1).max(254), password: z.string().min(1).max(256) }).strict();
+export const signInSchema = z
+  .object({ email: z.string().trim().toLowerCase().min(1).max(254), password: z.string().min(1).max(256) })
+  .strict();
 export const changePasswordSchema = z.object({ currentPassword: z.string().min(1).max(256), newPassword: passwordSchema }).strict();
 export const createUserSchema = z
   .object({ email: emailSchema, name: z.string().trim().min(1).max(120), role: roleSchema, password: passwordSchema })

@@ -1,5 +1,12 @@
 /** Fix tasks and the pruning list as the HTTP contract carries them (API.md "Work"). */
-export const TASK_KINDS = ['add-inbound-links', 'repair-broken-links', 'add-outbound-links', 'make-reachable', 'review-pruning', 'other'] as const;
+export const TASK_KINDS = [
+  'add-inbound-links',
+  'repair-broken-links',
+  'add-outbound-links',
+  'make-reachable',
+  'review-pruning',
+  'other',
+] as const;
 export const TASK_STATUSES = ['open', 'in-progress', 'done', 'wont-fix'] as const;
 export const TASK_PRIORITIES = ['low', 'normal', 'high'] as const;
 export type TaskKind = (typeof TASK_KINDS)[number];

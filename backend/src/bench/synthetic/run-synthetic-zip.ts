@@ -11,9 +11,17 @@ if (!outFile) {
 }
 const started = performance.now();
 const summary = await writeSyntheticZip(
-  { seed: Number(seed), pages: Number(pages), targetBytes: Number(pages) * 5_400, linksPerPage: 30,
-    changedFraction: Number(changedFraction), changeSeed: Number(changeSeed) },
+  {
+    seed: Number(seed),
+    pages: Number(pages),
+    targetBytes: Number(pages) * 5_400,
+    linksPerPage: 30,
+    changedFraction: Number(changedFraction),
+    changeSeed: Number(changeSeed),
+  },
   outFile,
 );
 const seconds = (performance.now() - started) / 1000;
-console.log(JSON.stringify({ ...summary, seconds: Number(seconds.toFixed(2)), peakRssMB: Math.round(process.memoryUsage().rss / 2 ** 20) }));
+console.log(
+  JSON.stringify({ ...summary, seconds: Number(seconds.toFixed(2)), peakRssMB: Math.round(process.memoryUsage().rss / 2 ** 20) }),
+);

@@ -59,8 +59,20 @@ describe('generateSyntheticDocSet (200 pages)', () => {
 
   it('uses every kind of link', () => {
     const all = pages.map((p) => p.content).join('\n');
-    for (const pattern of [/\]\(\.\.\/[^)]+\.md\)/, /\]\(\/docs\//, /\[\[[\w-]+\]\]/, /\[\[[\w-]+\|/, /\]\[ref-\d+\]/,
-      /<a href="/, /!\[Diagram \d+\]/, /\.md#[\w-]+\)/, /<https:\/\//, /\]\(https:\/\//, /missing-\d+\.md/, /\]\(#[\w-]+\)/])
+    for (const pattern of [
+      /\]\(\.\.\/[^)]+\.md\)/,
+      /\]\(\/docs\//,
+      /\[\[[\w-]+\]\]/,
+      /\[\[[\w-]+\|/,
+      /\]\[ref-\d+\]/,
+      /<a href="/,
+      /!\[Diagram \d+\]/,
+      /\.md#[\w-]+\)/,
+      /<https:\/\//,
+      /\]\(https:\/\//,
+      /missing-\d+\.md/,
+      /\]\(#[\w-]+\)/,
+    ])
       expect(all, String(pattern)).toMatch(pattern);
   });
 
@@ -76,8 +88,8 @@ describe('generateSyntheticDocSet (200 pages)', () => {
 
   it('has a power-law-like in-degree: a few pages draw many links, most draw few', () => {
     const inDegree = new Map<string, number>();
-    for (const p of pages) for (const m of p.content.matchAll(/\[\[([\w-]+)(?:\|[^\]]*)?\]\]/g))
-      inDegree.set(m[1]!, (inDegree.get(m[1]!) ?? 0) + 1);
+    for (const p of pages)
+      for (const m of p.content.matchAll(/\[\[([\w-]+)(?:\|[^\]]*)?\]\]/g)) inDegree.set(m[1]!, (inDegree.get(m[1]!) ?? 0) + 1);
     const sorted = [...inDegree.values()].sort((a, b) => b - a);
     // Heavy tail (Broder et al., WWW 2000, section 2; common practice for synthetic web graphs):
     // the top page gets many times the median.

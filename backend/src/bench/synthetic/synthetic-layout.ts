@@ -23,19 +23,68 @@ export const SYNTHETIC_SETTINGS = { entryPages: ['index.md'], basePath: SYNTHETI
 
 export function resolveOptions(o: SyntheticOptions): ResolvedOptions {
   const pages = o.pages ?? 10_000;
-  return { seed: o.seed, pages, targetBytes: o.targetBytes ?? pages * 5_400, linksPerPage: o.linksPerPage ?? 30,
-    changedFraction: o.changedFraction ?? 0, changeSeed: o.changeSeed ?? 0 };
+  return {
+    seed: o.seed,
+    pages,
+    targetBytes: o.targetBytes ?? pages * 5_400,
+    linksPerPage: o.linksPerPage ?? 30,
+    changedFraction: o.changedFraction ?? 0,
+    changeSeed: o.changeSeed ?? 0,
+  };
 }
 
-const AREAS = ['getting-started', 'guides', 'reference', 'operations', 'integrations', 'security', 'billing',
-  'administration', 'api', 'troubleshooting', 'release-notes', 'tutorials'];
-const TOPICS = ['accounts', 'projects', 'storage', 'networking', 'alerts', 'webhooks', 'exports', 'imports', 'search',
-  'permissions', 'audit', 'backups', 'scheduling', 'reports', 'dashboards', 'tokens', 'quotas', 'regions', 'sync', 'cli'];
+const AREAS = [
+  'getting-started',
+  'guides',
+  'reference',
+  'operations',
+  'integrations',
+  'security',
+  'billing',
+  'administration',
+  'api',
+  'troubleshooting',
+  'release-notes',
+  'tutorials',
+];
+const TOPICS = [
+  'accounts',
+  'projects',
+  'storage',
+  'networking',
+  'alerts',
+  'webhooks',
+  'exports',
+  'imports',
+  'search',
+  'permissions',
+  'audit',
+  'backups',
+  'scheduling',
+  'reports',
+  'dashboards',
+  'tokens',
+  'quotas',
+  'regions',
+  'sync',
+  'cli',
+];
 const VERBS = ['configure', 'enable', 'rotate', 'migrate', 'monitor', 'restore', 'limit', 'share', 'debug', 'automate'];
-const NOUNS = ['retention', 'keys', 'workspaces', 'pipelines', 'snapshots', 'members', 'policies', 'endpoints',
-  'schedules', 'limits', 'events', 'labels'];
-export const HEADINGS = ['Overview', 'Before you begin', 'Configuration', 'Examples', 'Limits', 'Troubleshooting',
-  'Next steps', 'Options'];
+const NOUNS = [
+  'retention',
+  'keys',
+  'workspaces',
+  'pipelines',
+  'snapshots',
+  'members',
+  'policies',
+  'endpoints',
+  'schedules',
+  'limits',
+  'events',
+  'labels',
+];
+export const HEADINGS = ['Overview', 'Before you begin', 'Configuration', 'Examples', 'Limits', 'Troubleshooting', 'Next steps', 'Options'];
 
 /** The page's file stem: readable words plus the page number, so every stem is unique (wiki links resolve). */
 export function stemOf(i: number, seed: number): string {

@@ -2,12 +2,24 @@ import { mulberry32, fnv1a, pick, type Random } from '../../modules/demo/generat
 import { relativePath } from '../../modules/demo/generator/link-syntax.js';
 import { codeBlock, sentence } from './synthetic-text.js';
 import {
-  coprimeStride, folderOf, headingsOf, pathOf, stemOf, SYNTHETIC_BASE_PATH, titleOf, zipfTarget, type ResolvedOptions,
+  coprimeStride,
+  folderOf,
+  headingsOf,
+  pathOf,
+  stemOf,
+  SYNTHETIC_BASE_PATH,
+  titleOf,
+  zipfTarget,
+  type ResolvedOptions,
 } from './synthetic-layout.js';
 
 export const ASSET_COUNT = 40;
-const EXTERNAL = ['https://status.cloud-vendor.example/incidents', 'https://standards.example.org/rfc/9110',
-  'https://community.synthetic.example/t/faq', 'https://www.video-host.example/watch?v=intro'];
+const EXTERNAL = [
+  'https://status.cloud-vendor.example/incidents',
+  'https://standards.example.org/rfc/9110',
+  'https://community.synthetic.example/t/faq',
+  'https://www.video-host.example/watch?v=intro',
+];
 
 export interface SyntheticPage {
   path: string;
@@ -16,7 +28,10 @@ export interface SyntheticPage {
 }
 
 export function slugOf(heading: string): string {
-  return heading.toLowerCase().replace(/[^a-z0-9 _-]/g, '').replace(/ /g, '-');
+  return heading
+    .toLowerCase()
+    .replace(/[^a-z0-9 _-]/g, '')
+    .replace(/ /g, '-');
 }
 
 /** Writes one link of a kind drawn by weight; returns the inline text and, for reference links, a definition. */
@@ -31,7 +46,10 @@ function link(i: number, o: ResolvedOptions, random: Random, stride: number, ref
   if (roll < 0.46) return `[${label}](${SYNTHETIC_BASE_PATH}/${pathOf(t, o.seed).replace(/\.md$/, '')})`;
   if (roll < 0.54) return `[[${stemOf(t, o.seed)}]]`;
   if (roll < 0.58) return `[[${stemOf(t, o.seed)}|${label.toLowerCase()}]]`;
-  if (roll < 0.64) { refs.push(`[ref-${refs.length + 1}]: ${rel}`); return `[${label}][ref-${refs.length}]`; }
+  if (roll < 0.64) {
+    refs.push(`[ref-${refs.length + 1}]: ${rel}`);
+    return `[${label}][ref-${refs.length}]`;
+  }
   if (roll < 0.69) return `<a href="${rel}">${label}</a>`;
   if (roll < 0.75) return `[${label}](${rel})`;
   if (roll < 0.8) {
@@ -54,12 +72,24 @@ export function renderSyntheticPage(i: number, o: ResolvedOptions, changed: bool
   const byteTarget = 0.93 * (o.targetBytes / o.pages) * (0.8 + 0.4 * random());
   const headings = headingsOf(i, o.seed);
   const refs: string[] = [];
-  const lines = ['---', `title: "${titleOf(i, o.seed)}"`, `tags: [${folderOf(i, o.seed).split('/')[0] || 'home'}]`, '---', '', `# ${titleOf(i, o.seed)}`, ''];
+  const lines = [
+    '---',
+    `title: "${titleOf(i, o.seed)}"`,
+    `tags: [${folderOf(i, o.seed).split('/')[0] || 'home'}]`,
+    '---',
+    '',
+    `# ${titleOf(i, o.seed)}`,
+    '',
+  ];
   let bytes = lines.join('\n').length;
   let links = 0;
-  const push = (line: string) => { lines.push(line); bytes += line.length + 1; };
+  const push = (line: string) => {
+    lines.push(line);
+    bytes += line.length + 1;
+  };
   for (let s = 0; s < headings.length; s++) {
-    push(`## ${headings[s]}`); push('');
+    push(`## ${headings[s]}`);
+    push('');
     const quota = Math.round((linkTarget * (s + 1)) / headings.length) - links;
     const sectionBytes = (byteTarget * (s + 1)) / headings.length;
     for (let k = 0; k < quota; k++, links++) {
@@ -67,7 +97,10 @@ export function renderSyntheticPage(i: number, o: ResolvedOptions, changed: bool
       push(`${sentence(random).slice(0, -1)}, as ${link(i, o, random, stride, refs)} explains.`);
       if (refs.length > refsBefore) bytes += refs[refsBefore]!.length + 1; // its definition is written at the end
     }
-    if (s === 1) { push(''); codeBlock(random).forEach(push); }
+    if (s === 1) {
+      push('');
+      codeBlock(random).forEach(push);
+    }
     push('');
     while (bytes + 90 < sectionBytes) push(sentence(random));
     push('');

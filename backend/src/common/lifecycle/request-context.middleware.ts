@@ -12,14 +12,23 @@ export function requestContext(lifecycle: LifecycleService, logRequests: boolean
     response.setHeader('X-Request-Id', id);
     if (lifecycle.draining && request.path.startsWith('/api')) {
       response.setHeader('Retry-After', '10');
-      response.status(503).json({ statusCode: 503, code: 'SHUTTING_DOWN', message: 'Linkloom is shutting down; try again in a few seconds.' });
+      response
+        .status(503)
+        .json({ statusCode: 503, code: 'SHUTTING_DOWN', message: 'Linkloom is shutting down; try again in a few seconds.' });
       return;
     }
     const started = process.hrtime.bigint();
     response.on('finish', () => {
       if (!logRequests) return;
       const ms = Number(process.hrtime.bigint() - started) / 1e6;
-      logger.log({ requestId: id, method: request.method, path: request.path, status: response.statusCode, ms: Math.round(ms * 10) / 10, userId: request.user?.id ?? null });
+      logger.log({
+        requestId: id,
+        method: request.method,
+        path: request.path,
+        status: response.statusCode,
+        ms: Math.round(ms * 10) / 10,
+        userId: request.user?.id ?? null,
+      });
     });
     next();
   };

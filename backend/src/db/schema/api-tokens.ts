@@ -7,10 +7,14 @@ export const apiTokens = pgTable(
   'api_tokens',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     tokenHash: text('token_hash').notNull(),
-    createdBy: uuid('created_by').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    createdBy: uuid('created_by')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     lastUsedAt: timestamp('last_used_at', { withTimezone: true }),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),

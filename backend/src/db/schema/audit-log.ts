@@ -14,5 +14,9 @@ export const auditLog = pgTable(
     docSetId: uuid('doc_set_id'),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
   },
-  (t) => [index('audit_log_at_idx').on(t.at), index('audit_log_entity_idx').on(t.entityType, t.entityId), index('audit_log_doc_set_idx').on(t.docSetId, t.at)],
+  (t) => [
+    index('audit_log_at_idx').on(t.at),
+    index('audit_log_entity_idx').on(t.entityType, t.entityId),
+    index('audit_log_doc_set_idx').on(t.docSetId, t.at),
+  ],
 );

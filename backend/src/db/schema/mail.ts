@@ -17,7 +17,9 @@ export const outbox = pgTable(
     subject: text('subject').notNull(),
     text: text('text').notNull(),
     html: text('html').notNull(),
-    status: text('status', { enum: ['pending', 'sending', 'sent', 'failed'] }).notNull().default('pending'),
+    status: text('status', { enum: ['pending', 'sending', 'sent', 'failed'] })
+      .notNull()
+      .default('pending'),
     attempts: integer('attempts').notNull().default(0),
     nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
     lastError: text('last_error'),
@@ -49,8 +51,12 @@ export const mailboxMessages = pgTable(
 export const subscriptions = pgTable(
   'subscriptions',
   {
-    userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     digest: boolean('digest').notNull().default(true),
     nothingChanged: boolean('nothing_changed').notNull().default(false),
   },

@@ -11,9 +11,15 @@ export const runs = pgTable(
   'runs',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
-    snapshotId: uuid('snapshot_id').notNull().references(() => snapshots.id, { onDelete: 'cascade' }),
-    status: text('status', { enum: ['queued', 'running', 'finished', 'failed'] }).notNull().default('queued'),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
+    snapshotId: uuid('snapshot_id')
+      .notNull()
+      .references(() => snapshots.id, { onDelete: 'cascade' }),
+    status: text('status', { enum: ['queued', 'running', 'finished', 'failed'] })
+      .notNull()
+      .default('queued'),
     trigger: text('trigger', { enum: ['import', 'manual', 'nightly'] }).notNull(),
     settings: jsonb('settings').$type<DocSetSettings>().notNull(),
     iterations: integer('iterations'),
@@ -35,7 +41,9 @@ export const runs = pgTable(
 export const pageMetrics = pgTable(
   'page_metrics',
   {
-    runId: uuid('run_id').notNull().references(() => runs.id, { onDelete: 'cascade' }),
+    runId: uuid('run_id')
+      .notNull()
+      .references(() => runs.id, { onDelete: 'cascade' }),
     pageId: bigint('page_id', { mode: 'number' }).notNull(),
     path: text('path').notNull(),
     title: text('title').notNull(),
@@ -68,7 +76,9 @@ export const pageMetrics = pgTable(
 export const linkSuggestions = pgTable(
   'link_suggestions',
   {
-    runId: uuid('run_id').notNull().references(() => runs.id, { onDelete: 'cascade' }),
+    runId: uuid('run_id')
+      .notNull()
+      .references(() => runs.id, { onDelete: 'cascade' }),
     targetPageId: bigint('target_page_id', { mode: 'number' }).notNull(),
     sourcePageId: bigint('source_page_id', { mode: 'number' }).notNull(),
     scoreGain: doublePrecision('score_gain').notNull(),

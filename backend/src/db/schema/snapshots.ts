@@ -1,5 +1,18 @@
 import { sql } from 'drizzle-orm';
-import { bigint, bigserial, boolean, customType, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  bigint,
+  bigserial,
+  boolean,
+  customType,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { docSets } from './doc-sets.js';
 import { users } from './users.js';
 
@@ -17,8 +30,12 @@ export const snapshots = pgTable(
   'snapshots',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
-    status: text('status', { enum: ['received', 'importing', 'ready', 'failed'] }).notNull().default('received'),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
+    status: text('status', { enum: ['received', 'importing', 'ready', 'failed'] })
+      .notNull()
+      .default('received'),
     source: text('source', { enum: ['upload', 'ci', 'folder', 'demo'] }).notNull(),
     label: text('label'),
     progressDone: integer('progress_done').notNull().default(0),
@@ -54,7 +71,9 @@ export const pages = pgTable(
   'pages',
   {
     id: bigserial('id', { mode: 'number' }).primaryKey(),
-    snapshotId: uuid('snapshot_id').notNull().references(() => snapshots.id, { onDelete: 'cascade' }),
+    snapshotId: uuid('snapshot_id')
+      .notNull()
+      .references(() => snapshots.id, { onDelete: 'cascade' }),
     path: text('path').notNull(),
     title: text('title').notNull(),
     contentHash: text('content_hash').notNull(),
@@ -83,7 +102,9 @@ export const links = pgTable(
   'links',
   {
     id: bigserial('id', { mode: 'number' }).primaryKey(),
-    snapshotId: uuid('snapshot_id').notNull().references(() => snapshots.id, { onDelete: 'cascade' }),
+    snapshotId: uuid('snapshot_id')
+      .notNull()
+      .references(() => snapshots.id, { onDelete: 'cascade' }),
     sourcePageId: bigint('source_page_id', { mode: 'number' }).notNull(),
     line: integer('line').notNull(),
     column: integer('column').notNull(),
@@ -95,7 +116,10 @@ export const links = pgTable(
     targetIsAsset: boolean('target_is_asset').notNull().default(false),
     anchor: text('anchor'),
     reason: text('reason'),
-    flags: text('flags').array().notNull().default(sql`'{}'::text[]`),
+    flags: text('flags')
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
   },
   (t) => [
     index('links_snapshot_source_idx').on(t.snapshotId, t.sourcePageId),
@@ -108,7 +132,9 @@ export const assets = pgTable(
   'assets',
   {
     id: bigserial('id', { mode: 'number' }).primaryKey(),
-    snapshotId: uuid('snapshot_id').notNull().references(() => snapshots.id, { onDelete: 'cascade' }),
+    snapshotId: uuid('snapshot_id')
+      .notNull()
+      .references(() => snapshots.id, { onDelete: 'cascade' }),
     path: text('path').notNull(),
     bytes: integer('bytes').notNull().default(0),
   },

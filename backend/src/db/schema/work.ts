@@ -1,12 +1,22 @@
 import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type PruningReason, type TaskFinding } from '@linkloom/shared';
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { docSets } from './doc-sets.js';
 import { users } from './users.js';
 
 // The contract types live in shared/ (front and back end use them); re-exported for the schema's readers.
 export { TASK_KINDS, TASK_STATUSES, type PruningReason, type TaskFinding };
-
-
 
 /**
  * A fix task. Keyed to the page by doc set + path (not by page id), so it follows the page across snapshots.
@@ -16,7 +26,9 @@ export const tasks = pgTable(
   'tasks',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     pagePath: text('page_path').notNull(),
     kind: text('kind', { enum: TASK_KINDS }).notNull(),
     title: text('title').notNull(),
@@ -45,7 +57,9 @@ export const taskEvents = pgTable(
   'task_events',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    taskId: uuid('task_id').notNull().references(() => tasks.id, { onDelete: 'cascade' }),
+    taskId: uuid('task_id')
+      .notNull()
+      .references(() => tasks.id, { onDelete: 'cascade' }),
     type: text('type', { enum: ['comment', 'change'] }).notNull(),
     actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
     actorName: text('actor_name').notNull(),
@@ -58,18 +72,21 @@ export const taskEvents = pgTable(
 
 /** One row per doc set: the pruning list's optimistic-concurrency version and the run it was built from. */
 export const pruningLists = pgTable('pruning_lists', {
-  docSetId: uuid('doc_set_id').primaryKey().references(() => docSets.id, { onDelete: 'cascade' }),
+  docSetId: uuid('doc_set_id')
+    .primaryKey()
+    .references(() => docSets.id, { onDelete: 'cascade' }),
   version: integer('version').notNull().default(0),
   runId: uuid('run_id'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });
 
-
 /** The pages shown on the pruning list for the latest run (rule matches, nominations and decided pages). */
 export const pruningCandidates = pgTable(
   'pruning_candidates',
   {
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     path: text('path').notNull(),
     runId: uuid('run_id'),
     title: text('title').notNull().default(''),
@@ -88,7 +105,9 @@ export const pruningCandidates = pgTable(
 export const pruningDecisions = pgTable(
   'pruning_decisions',
   {
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     path: text('path').notNull(),
     decision: text('decision', { enum: ['approve', 'reject', 'keep'] }).notNull(),
     note: text('note').notNull().default(''),
@@ -107,14 +126,19 @@ export const pruningNominations = pgTable(
   'pruning_nominations',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    docSetId: uuid('doc_set_id').notNull().references(() => docSets.id, { onDelete: 'cascade' }),
+    docSetId: uuid('doc_set_id')
+      .notNull()
+      .references(() => docSets.id, { onDelete: 'cascade' }),
     path: text('path').notNull(),
     reason: text('reason').notNull(),
     nominatedBy: uuid('nominated_by').references(() => users.id, { onDelete: 'set null' }),
     nominatedByName: text('nominated_by_name').notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('pruning_nominations_path_idx').on(t.docSetId, t.path), uniqueIndex('pruning_nominations_once').on(t.docSetId, t.path, t.nominatedBy)],
+  (t) => [
+    index('pruning_nominations_path_idx').on(t.docSetId, t.path),
+    uniqueIndex('pruning_nominations_once').on(t.docSetId, t.path, t.nominatedBy),
+  ],
 );
 
 export type TaskRow = typeof tasks.$inferSelect;

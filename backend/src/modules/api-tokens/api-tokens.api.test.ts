@@ -17,7 +17,14 @@ describe('API tokens for CI jobs', () => {
   afterAll(async () => t?.close());
 
   it('lets an admin create a token whose secret is shown once, and refuses editors', async () => {
-    expect((await t.http.post(`/api/doc-sets/${docSetId}/tokens`).set('Authorization', `Bearer ${await t.tokenFor('editor')}`).send({ name: 'docs-ci' })).status).toBe(403);
+    expect(
+      (
+        await t.http
+          .post(`/api/doc-sets/${docSetId}/tokens`)
+          .set('Authorization', `Bearer ${await t.tokenFor('editor')}`)
+          .send({ name: 'docs-ci' })
+      ).status,
+    ).toBe(403);
     const admin = await t.tokenFor('admin');
     const created = await t.http.post(`/api/doc-sets/${docSetId}/tokens`).set('Authorization', `Bearer ${admin}`).send({ name: 'docs-ci' });
     expect(created.status).toBe(201);
@@ -29,8 +36,14 @@ describe('API tokens for CI jobs', () => {
   });
 
   it('pushes a snapshot (recorded as source ci) and reads the run of its own doc set', async () => {
-    const zip = await wellFormedZip({ 'index.md': '# Home\n[Guide](guide.md)\n', 'guide.md': '# Guide\n[Home](index.md) [gone](missing.md)\n' });
-    const pushed = await t.http.post(`/api/doc-sets/${docSetId}/snapshots`).set('Authorization', `Bearer ${token}`).attach('archive', zip, 'docs.zip');
+    const zip = await wellFormedZip({
+      'index.md': '# Home\n[Guide](guide.md)\n',
+      'guide.md': '# Guide\n[Home](index.md) [gone](missing.md)\n',
+    });
+    const pushed = await t.http
+      .post(`/api/doc-sets/${docSetId}/snapshots`)
+      .set('Authorization', `Bearer ${token}`)
+      .attach('archive', zip, 'docs.zip');
     expect(pushed.status).toBe(202);
     const kit = await importKit(t, docSetId);
     const done = await kit.waitFor(pushed.body.snapshot.id);

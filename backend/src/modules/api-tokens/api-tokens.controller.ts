@@ -17,7 +17,11 @@ export class ApiTokensController {
   /** The secret is in this answer only; store it in the CI job's secrets. */
   @Post()
   @ApiZodBody(createTokenSchema)
-  create(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Body(new ZodPipe(createTokenSchema)) body: { name: string }) {
+  create(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Body(new ZodPipe(createTokenSchema)) body: { name: string },
+  ) {
     return this.tokens.create(actor, docSetId, body.name);
   }
 
@@ -28,7 +32,11 @@ export class ApiTokensController {
 
   @Delete(':tokenId')
   @HttpCode(204)
-  async revoke(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('tokenId', ParseUUIDPipe) tokenId: string) {
+  async revoke(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('tokenId', ParseUUIDPipe) tokenId: string,
+  ) {
     await this.tokens.revoke(actor, docSetId, tokenId);
   }
 }

@@ -14,7 +14,13 @@ export class ApiTokensRepository {
 
   async list(docSetId: string) {
     return this.database.db
-      .select({ id: apiTokens.id, name: apiTokens.name, createdAt: apiTokens.createdAt, lastUsedAt: apiTokens.lastUsedAt, createdBy: users.name })
+      .select({
+        id: apiTokens.id,
+        name: apiTokens.name,
+        createdAt: apiTokens.createdAt,
+        lastUsedAt: apiTokens.lastUsedAt,
+        createdBy: users.name,
+      })
       .from(apiTokens)
       .leftJoin(users, eq(users.id, apiTokens.createdBy))
       .where(and(eq(apiTokens.docSetId, docSetId), isNull(apiTokens.revokedAt)))
@@ -33,7 +39,14 @@ export class ApiTokensRepository {
   /** The live token with this hash and the user who made it (still enabled). */
   async findActive(tokenHash: string) {
     const [row] = await this.database.db
-      .select({ id: apiTokens.id, docSetId: apiTokens.docSetId, name: apiTokens.name, userId: users.id, email: users.email, disabled: users.disabled })
+      .select({
+        id: apiTokens.id,
+        docSetId: apiTokens.docSetId,
+        name: apiTokens.name,
+        userId: users.id,
+        email: users.email,
+        disabled: users.disabled,
+      })
       .from(apiTokens)
       .innerJoin(users, eq(users.id, apiTokens.createdBy))
       .where(and(eq(apiTokens.tokenHash, tokenHash), isNull(apiTokens.revokedAt)))

@@ -30,12 +30,24 @@ export class AuditService {
     options: { docSetId?: string; executor?: Executor } = {},
   ): Promise<void> {
     await this.repository.insert(
-      { actorId: actor?.id ?? null, actorEmail: actor?.email ?? 'system', action, entityType, entityId, details, docSetId: options.docSetId ?? null },
+      {
+        actorId: actor?.id ?? null,
+        actorEmail: actor?.email ?? 'system',
+        action,
+        entityType,
+        entityId,
+        details,
+        docSetId: options.docSetId ?? null,
+      },
       options.executor,
     );
   }
 
-  async list(filter: { entityType?: string; entityId?: string; docSetId?: string }, page: number, pageSize: number): Promise<ListResult<AuditItem>> {
+  async list(
+    filter: { entityType?: string; entityId?: string; docSetId?: string },
+    page: number,
+    pageSize: number,
+  ): Promise<ListResult<AuditItem>> {
     const { rows, total } = await this.repository.list(filter, (page - 1) * pageSize, pageSize);
     return {
       items: rows.map((r) => ({ ...r, at: r.at.toISOString() })),

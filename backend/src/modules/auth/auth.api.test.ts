@@ -37,7 +37,9 @@ describe('sign-in and tokens', () => {
     const me = await t.http.get('/api/me').set('Authorization', `Bearer ${valid}`);
     const sub = me.body.id as string;
     const [header, payload, signature] = valid.split('.');
-    const forgedPayload = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(payload, 'base64url').toString()), role: 'admin', ver: 99 })).toString('base64url');
+    const forgedPayload = Buffer.from(
+      JSON.stringify({ ...JSON.parse(Buffer.from(payload, 'base64url').toString()), role: 'admin', ver: 99 }),
+    ).toString('base64url');
     const now = Math.floor(Date.now() / 1000);
     const cases: Record<string, string | undefined> = {
       missing: undefined,
@@ -87,11 +89,20 @@ describe('sign-in and tokens', () => {
     expect((await t.http.get('/api/me').set('Authorization', `Bearer ${token}`)).status).toBe(401);
 
     const again = await t.http.post('/api/auth/sign-in').send({ email: 'viewer@demo.linkloom.test', password: DEMO_PASSWORD });
-    const weak = await t.http.post('/api/me/password').set('Authorization', `Bearer ${again.body.accessToken}`).send({ currentPassword: DEMO_PASSWORD, newPassword: 'short' });
+    const weak = await t.http
+      .post('/api/me/password')
+      .set('Authorization', `Bearer ${again.body.accessToken}`)
+      .send({ currentPassword: DEMO_PASSWORD, newPassword: 'short' });
     expect(weak.status).toBe(400);
-    const common = await t.http.post('/api/me/password').set('Authorization', `Bearer ${again.body.accessToken}`).send({ currentPassword: DEMO_PASSWORD, newPassword: 'password123' });
+    const common = await t.http
+      .post('/api/me/password')
+      .set('Authorization', `Bearer ${again.body.accessToken}`)
+      .send({ currentPassword: DEMO_PASSWORD, newPassword: 'password123' });
     expect(common.status).toBe(400);
-    const changed = await t.http.post('/api/me/password').set('Authorization', `Bearer ${again.body.accessToken}`).send({ currentPassword: DEMO_PASSWORD, newPassword: 'a much longer pass phrase' });
+    const changed = await t.http
+      .post('/api/me/password')
+      .set('Authorization', `Bearer ${again.body.accessToken}`)
+      .send({ currentPassword: DEMO_PASSWORD, newPassword: 'a much longer pass phrase' });
     expect(changed.status).toBe(200);
     expect((await t.http.get('/api/me').set('Authorization', `Bearer ${again.body.accessToken}`)).status).toBe(401);
     expect((await t.http.get('/api/me').set('Authorization', `Bearer ${changed.body.accessToken}`)).status).toBe(200);

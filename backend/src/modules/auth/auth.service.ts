@@ -23,7 +23,9 @@ export class AuthService {
   async signIn(input: SignInInput): Promise<SignInResult> {
     const wait = this.limiter.retryAfter(input.email);
     if (wait > 0) {
-      throw new AppError(429, 'TOO_MANY_SIGN_IN_ATTEMPTS', `Too many failed sign-ins for this account. Try again in ${wait} seconds.`, [{ retryAfterSeconds: wait }]);
+      throw new AppError(429, 'TOO_MANY_SIGN_IN_ATTEMPTS', `Too many failed sign-ins for this account. Try again in ${wait} seconds.`, [
+        { retryAfterSeconds: wait },
+      ]);
     }
     const user = await this.users.findByEmail(input.email);
     const passwordOk = await verifyPassword(input.password, user?.passwordHash ?? DUMMY_HASH);

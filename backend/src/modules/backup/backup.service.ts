@@ -47,7 +47,11 @@ export class BackupService implements OnApplicationBootstrap, OnApplicationShutd
     const file = join(this.folder, `${BACKUP_PREFIX}${new Date().toISOString().replace(/[:.]/g, '-')}.tar.gz`);
     await this.database.backup(file);
     this.logger.log(`Backup written to ${file}`);
-    const old = readdirSync(this.folder).filter((f) => f.startsWith(BACKUP_PREFIX)).sort().reverse().slice(this.config.backupsKept);
+    const old = readdirSync(this.folder)
+      .filter((f) => f.startsWith(BACKUP_PREFIX))
+      .sort()
+      .reverse()
+      .slice(this.config.backupsKept);
     for (const name of old) rmSync(join(this.folder, name));
     return file;
   }

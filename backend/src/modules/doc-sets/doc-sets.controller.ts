@@ -32,7 +32,11 @@ export class DocSetsController {
   @Patch(':docSetId')
   @MinRole('editor')
   @ApiZodBody(updateDocSetSchema)
-  update(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) id: string, @Body(new ZodPipe(updateDocSetSchema)) body: UpdateDocSetInput) {
+  update(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) id: string,
+    @Body(new ZodPipe(updateDocSetSchema)) body: UpdateDocSetInput,
+  ) {
     return this.docSets.update(actor, id, body);
   }
 }

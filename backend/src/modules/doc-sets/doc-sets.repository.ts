@@ -34,7 +34,11 @@ export class DocSetsRepository {
   }
 
   async update(id: string, values: Partial<Pick<DocSetRow, 'name' | 'description' | 'settings'>>): Promise<DocSetRow | null> {
-    const [row] = await this.database.db.update(docSets).set({ ...values, updatedAt: new Date() }).where(eq(docSets.id, id)).returning();
+    const [row] = await this.database.db
+      .update(docSets)
+      .set({ ...values, updatedAt: new Date() })
+      .where(eq(docSets.id, id))
+      .returning();
     return row ?? null;
   }
 }

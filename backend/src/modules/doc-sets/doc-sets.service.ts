@@ -1,5 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { defaultDocSetSettings, docSetSettingsSchema, type CreateDocSetInput, type DocSet, type DocSetSettings, type DocSetSettingsPatch, type UpdateDocSetInput } from '@linkloom/shared';
+import {
+  defaultDocSetSettings,
+  docSetSettingsSchema,
+  type CreateDocSetInput,
+  type DocSet,
+  type DocSetSettings,
+  type DocSetSettingsPatch,
+  type UpdateDocSetInput,
+} from '@linkloom/shared';
 import { isAbsolute, relative, resolve } from 'node:path';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config.js';
 import { AppError, notFound } from '../../common/app-error.js';
@@ -37,7 +45,19 @@ export class DocSetsService {
     const settings = input.settings ? this.checkSettings(actor, this.merge(current.settings, input.settings), current.settings) : undefined;
     const row = await this.repository.update(id, { name: input.name, description: input.description, settings });
     if (!row) throw notFound('The doc set');
-    await this.audit.record(actor, 'doc-set.updated', 'doc-set', id, { changed: Object.keys(input.settings ?? {}).concat(input.name ? ['name'] : [], input.description !== undefined ? ['description'] : []) }, { docSetId: id });
+    await this.audit.record(
+      actor,
+      'doc-set.updated',
+      'doc-set',
+      id,
+      {
+        changed: Object.keys(input.settings ?? {}).concat(
+          input.name ? ['name'] : [],
+          input.description !== undefined ? ['description'] : [],
+        ),
+      },
+      { docSetId: id },
+    );
     return toDocSet(row);
   }
 
@@ -51,7 +71,11 @@ export class DocSetsService {
     if (actor.role !== 'admin') throw new AppError(403, 'FORBIDDEN', 'Only an admin can set the server folder of a doc set.');
     const root = this.config.sourceRoot;
     if (!root) {
-      throw new AppError(422, 'SOURCE_ROOT_NOT_SET', 'Server folders are turned off: set SOURCE_ROOT on the server to the folder that may hold doc sets, then try again.');
+      throw new AppError(
+        422,
+        'SOURCE_ROOT_NOT_SET',
+        'Server folders are turned off: set SOURCE_ROOT on the server to the folder that may hold doc sets, then try again.',
+      );
     }
     const folder = resolve(root, settings.sourceFolder);
     const inside = relative(root, folder);

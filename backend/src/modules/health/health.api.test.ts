@@ -43,7 +43,10 @@ describe('health, API docs, headers and error bodies', () => {
     expect(bad.status).toBe(400);
     expect(bad.body.message).toBe('The request body is not valid JSON.');
     expect(JSON.stringify(bad.body)).not.toMatch(/at .*\.js|node_modules/);
-    const big = await t.http.post('/api/auth/sign-in').set('Content-Type', 'application/json').send(JSON.stringify({ email: 'x'.repeat(2_000_000), password: 'y' }));
+    const big = await t.http
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ email: 'x'.repeat(2_000_000), password: 'y' }));
     expect(big.status).toBe(413);
     expect((await t.http.get('/api/health')).status).toBe(200);
   });

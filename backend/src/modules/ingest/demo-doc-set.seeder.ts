@@ -61,7 +61,11 @@ export class DemoDocSetSeeder implements OnModuleInit {
 
   async seed(): Promise<string> {
     const first = generateDemoHandbook(1);
-    const docSet = await this.docSets.create(SYSTEM, { name: DEMO_DOC_SET_NAME, description: `The handbook of the ${ORG}, an invented organisation, at three points in time.`, settings: first.settings });
+    const docSet = await this.docSets.create(SYSTEM, {
+      name: DEMO_DOC_SET_NAME,
+      description: `The handbook of the ${ORG}, an invented organisation, at three points in time.`,
+      settings: first.settings,
+    });
     this.demoDocSetId = docSet.id;
     for (const version of VERSIONS) {
       const files = version === 1 ? first.files : generateDemoHandbook(version).files;

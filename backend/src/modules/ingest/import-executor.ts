@@ -79,11 +79,24 @@ export class ImportExecutor implements OnApplicationBootstrap {
     try {
       const previous = await this.snapshots.latestReady(docSet.id);
       const result = await runImport(
-        { snapshotId: snapshot.id, previousSnapshotId: previous?.id ?? null, settings: docSet.settings, plan: job.plan, readPages: job.readPages },
+        {
+          snapshotId: snapshot.id,
+          previousSnapshotId: previous?.id ?? null,
+          settings: docSet.settings,
+          plan: job.plan,
+          readPages: job.readPages,
+        },
         { snapshots: this.snapshots, store: this.store, limits: this.limits, parsers: this.parsers },
       );
-      this.logger.log(`Snapshot ${snapshot.id} ready: ${result.pageCount} pages (${result.reusedPageCount} reused), ${result.linkCount} links in ${result.importMs} ms`);
-      await this.events.emit('snapshot.ready', { docSetId: docSet.id, snapshotId: snapshot.id, trigger: job.trigger, actorId: snapshot.createdBy });
+      this.logger.log(
+        `Snapshot ${snapshot.id} ready: ${result.pageCount} pages (${result.reusedPageCount} reused), ${result.linkCount} links in ${result.importMs} ms`,
+      );
+      await this.events.emit('snapshot.ready', {
+        docSetId: docSet.id,
+        snapshotId: snapshot.id,
+        trigger: job.trigger,
+        actorId: snapshot.createdBy,
+      });
     } catch (error) {
       await this.fail(snapshot, error);
     } finally {
@@ -101,7 +114,12 @@ export class ImportExecutor implements OnApplicationBootstrap {
     } catch (cleanupError) {
       this.logger.error(`Could not clean up failed snapshot ${snapshot.id}: ${String(cleanupError)}`);
     }
-    await this.events.emit('snapshot.failed', { docSetId: snapshot.docSetId, snapshotId: snapshot.id, code: failure.code, message: failure.message });
+    await this.events.emit('snapshot.failed', {
+      docSetId: snapshot.docSetId,
+      snapshotId: snapshot.id,
+      code: failure.code,
+      message: failure.message,
+    });
   }
 
   private async clearFolder(dir: string): Promise<void> {

@@ -24,7 +24,16 @@ export function toImportFailure(error: unknown): { failure: ImportFailure; inter
     return { failure: new ImportFailure(error.code, `${error.message}${detail}`), internal: false };
   }
   if (error instanceof ParsePoolError) {
-    return { failure: new ImportFailure(error.code, 'A page needed more memory than the parser may use; the import was stopped.'), internal: false };
+    return {
+      failure: new ImportFailure(error.code, 'A page needed more memory than the parser may use; the import was stopped.'),
+      internal: false,
+    };
   }
-  return { failure: new ImportFailure('IMPORT_FAILED', 'The import failed because of an error on our side; try again, and report it if it keeps failing.'), internal: true };
+  return {
+    failure: new ImportFailure(
+      'IMPORT_FAILED',
+      'The import failed because of an error on our side; try again, and report it if it keeps failing.',
+    ),
+    internal: true,
+  };
 }

@@ -48,15 +48,22 @@ export async function runImport(input: ImportInput, deps: ImportDeps): Promise<R
   checkDeadline();
   const assets = input.plan.entries.filter((entry) => entry.kind === 'asset');
   for (let i = 0; i < assets.length; i += deps.limits.linkInsertRows) {
-    await deps.store.insertAssets(input.snapshotId, assets.slice(i, i + deps.limits.linkInsertRows).map((a) => ({ path: a.path, bytes: a.size })));
+    await deps.store.insertAssets(
+      input.snapshotId,
+      assets.slice(i, i + deps.limits.linkInsertRows).map((a) => ({ path: a.path, bytes: a.size })),
+    );
   }
-  const linkCount = await resolveAndWriteLinks(writer.pages, assets.map((a) => a.path), {
-    store: deps.store,
-    snapshotId: input.snapshotId,
-    settings: input.settings,
-    batchRows: deps.limits.linkInsertRows,
-    checkDeadline,
-  });
+  const linkCount = await resolveAndWriteLinks(
+    writer.pages,
+    assets.map((a) => a.path),
+    {
+      store: deps.store,
+      snapshotId: input.snapshotId,
+      settings: input.settings,
+      batchRows: deps.limits.linkInsertRows,
+      checkDeadline,
+    },
+  );
   checkDeadline();
   const counts: ReadyCounts = {
     pageCount: writer.pages.size,

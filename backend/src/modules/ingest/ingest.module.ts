@@ -20,7 +20,11 @@ import { ArchiveUploadInterceptor } from './upload/archive-upload.interceptor.js
     {
       provide: INGEST_LIMITS,
       inject: [APP_CONFIG],
-      useFactory: (config: AppConfig) => ({ ...DEFAULT_INGEST_LIMITS, importTimeoutMs: config.importTimeoutSeconds * 1000, pageTimeoutMs: config.pageParseTimeoutMs }),
+      useFactory: (config: AppConfig) => ({
+        ...DEFAULT_INGEST_LIMITS,
+        importTimeoutMs: config.importTimeoutSeconds * 1000,
+        pageTimeoutMs: config.pageParseTimeoutMs,
+      }),
     },
     SnapshotsRepository,
     PageStoreRepository,

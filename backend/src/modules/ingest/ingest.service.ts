@@ -36,7 +36,12 @@ export class IngestService {
       if (upload.size === 0) throw emptyUpload();
       await this.checkQuota(actor);
       const plan = await this.inspect(() => inspectArchive(upload.path, inspectOptions(docSet.settings)));
-      const snapshot = await this.begin(docSet, plan, { source: actor.apiTokenDocSetId ? 'ci' : 'upload', createdBy: actor.id, archiveSha256: upload.sha256, archiveBytes: upload.size });
+      const snapshot = await this.begin(docSet, plan, {
+        source: actor.apiTokenDocSetId ? 'ci' : 'upload',
+        createdBy: actor.id,
+        archiveSha256: upload.sha256,
+        archiveBytes: upload.size,
+      });
       this.executor.start({
         snapshot,
         docSet,
@@ -59,8 +64,19 @@ export class IngestService {
     if (!folder) throw new AppError(422, 'SOURCE_FOLDER_NOT_SET', 'This doc set has no server folder; set one in its settings first.');
     if (actor) await this.checkQuota(actor);
     const plan = await this.inspect(() => inspectFolder(folder, inspectOptions(docSet.settings)));
-    const snapshot = await this.begin(docSet, plan, { source: 'folder', createdBy: actor?.id ?? null, archiveSha256: null, archiveBytes: null });
-    this.executor.start({ snapshot, docSet, plan, trigger, readPages: () => readFolderPages(folder, plan, inspectOptions(docSet.settings).limits) });
+    const snapshot = await this.begin(docSet, plan, {
+      source: 'folder',
+      createdBy: actor?.id ?? null,
+      archiveSha256: null,
+      archiveBytes: null,
+    });
+    this.executor.start({
+      snapshot,
+      docSet,
+      plan,
+      trigger,
+      readPages: () => readFolderPages(folder, plan, inspectOptions(docSet.settings).limits),
+    });
     return toSnapshotView(snapshot);
   }
 
@@ -71,7 +87,13 @@ export class IngestService {
   async importFolderAndWait(docSet: DocSet, folder: string, label: string): Promise<SnapshotView> {
     const plan = await this.inspect(() => inspectFolder(folder, inspectOptions(docSet.settings)));
     const snapshot = await this.begin(docSet, plan, { source: 'demo', createdBy: null, archiveSha256: null, archiveBytes: null, label });
-    await this.executor.start({ snapshot, docSet, plan, trigger: 'import', readPages: () => readFolderPages(folder, plan, inspectOptions(docSet.settings).limits) });
+    await this.executor.start({
+      snapshot,
+      docSet,
+      plan,
+      trigger: 'import',
+      readPages: () => readFolderPages(folder, plan, inspectOptions(docSet.settings).limits),
+    });
     return this.get(docSet.id, snapshot.id);
   }
 
@@ -95,7 +117,11 @@ export class IngestService {
   private async checkQuota(actor: Actor): Promise<void> {
     const since = new Date(Date.now() - 3600_000);
     if ((await this.snapshots.countCreatedSince(actor.id, since)) >= this.config.importsPerHour) {
-      throw new AppError(429, 'IMPORT_QUOTA_EXCEEDED', `You have started ${this.config.importsPerHour} imports in the last hour, the limit; try again later.`);
+      throw new AppError(
+        429,
+        'IMPORT_QUOTA_EXCEEDED',
+        `You have started ${this.config.importsPerHour} imports in the last hour, the limit; try again later.`,
+      );
     }
   }
 
@@ -115,7 +141,13 @@ export class IngestService {
   ): Promise<SnapshotRow> {
     const ignored = plan.ignored.slice(0, 1000).map((entry) => ({ path: entry.path, reason: entry.ignoredReason ?? 'ignored' }));
     const pages = plan.entries.filter((entry) => entry.kind === 'page').length;
-    const row = await this.snapshots.insertReceived({ docSetId: docSet.id, label: origin.label ?? null, ...origin, ignored, progressTotal: pages });
+    const row = await this.snapshots.insertReceived({
+      docSetId: docSet.id,
+      label: origin.label ?? null,
+      ...origin,
+      ignored,
+      progressTotal: pages,
+    });
     if (!row) {
       throw new AppError(409, 'IMPORT_IN_PROGRESS', 'An import of this doc set is already running; wait for it to finish, then try again.');
     }

@@ -26,7 +26,8 @@ const handbook = (pages: number, changed = -1): Record<string, string> => {
   const files: Record<string, string> = {};
   for (let i = 0; i < pages; i += 1) {
     const next = (i + 1) % pages;
-    files[`book/p${i}.md`] = `# Page ${i}${i === changed ? ' (edited)' : ''}\n\n## Details\n\nGo to [page ${next}](p${next}.md#details) or [home](p0.md).\n`;
+    files[`book/p${i}.md`] =
+      `# Page ${i}${i === changed ? ' (edited)' : ''}\n\n## Details\n\nGo to [page ${next}](p${next}.md#details) or [home](p0.md).\n`;
   }
   return files;
 };
@@ -80,7 +81,9 @@ describe('snapshot import pipeline', () => {
     );
     expect(done.status).toBe('ready');
     expect(done.pageCount).toBe(8);
-    const flagged = new Set(done.warnings.filter((w: { code: string }) => w.code === 'FRONT_MATTER_INVALID').map((w: { path: string }) => w.path));
+    const flagged = new Set(
+      done.warnings.filter((w: { code: string }) => w.code === 'FRONT_MATTER_INVALID').map((w: { path: string }) => w.path),
+    );
     for (const path of ['unclosed.md', 'tabs.md', 'bomb.md', 'big.md']) expect(flagged.has(path), path).toBe(true);
     expect((globalThis as { __pwned?: unknown }).__pwned).toBeUndefined();
     expect(({} as { polluted?: unknown }).polluted).toBeUndefined();
@@ -105,13 +108,17 @@ describe('snapshot import pipeline', () => {
     // Measured and reported; the 100 ms p99 target of check 34 is asserted loosely because PGlite runs on this
     // thread (RELIABILITY.md P6) and a multi-MB insert blocks it for its whole duration.
     const p99 = delay.percentile(99) / 1e6;
-    console.info(`check 34: import ${done.importMs} ms, event-loop delay p99 ${p99.toFixed(1)} ms, max ${(delay.max / 1e6).toFixed(1)} ms, timed out: ${skipped.join(', ') || 'none'}`);
+    console.info(
+      `check 34: import ${done.importMs} ms, event-loop delay p99 ${p99.toFixed(1)} ms, max ${(delay.max / 1e6).toFixed(1)} ms, timed out: ${skipped.join(', ') || 'none'}`,
+    );
     expect(p99).toBeLessThan(1_000);
   });
 
   it('61: five uploads at once give exactly one 202 and four 409 IMPORT_IN_PROGRESS; the accepted archive wins', async () => {
     const kit = await importKit(t, await createDocSet(t, {}, 'Race'));
-    const zips = await Promise.all([1, 2, 3, 4, 5].map((n) => wellFormedZip({ [`v${n}/index.md`]: `# Version ${n}\n`, [`v${n}/only-${n}.md`]: `# Only ${n}\n` })));
+    const zips = await Promise.all(
+      [1, 2, 3, 4, 5].map((n) => wellFormedZip({ [`v${n}/index.md`]: `# Version ${n}\n`, [`v${n}/only-${n}.md`]: `# Only ${n}\n` })),
+    );
     // Hold the accepted import until every upload has been answered: a small archive could otherwise finish
     // importing before the last request arrives, and a second import after it would rightly be accepted.
     const executor = t.app.get(ImportExecutor);
@@ -170,9 +177,14 @@ describe('snapshot import pipeline', () => {
     writeFileSync(join(folder, 'index.md'), '# Home\n\n[Sub](sub/page.md)\n');
     writeFileSync(join(folder, 'sub', 'page.md'), '# Sub page\n\n[Back](../index.md)\n');
     const admin = await t.tokenFor('admin');
-    const created = await t.http.post('/api/doc-sets').set('Authorization', `Bearer ${admin}`).send({ name: 'Folder', settings: { sourceFolder: 'guide' } });
+    const created = await t.http
+      .post('/api/doc-sets')
+      .set('Authorization', `Bearer ${admin}`)
+      .send({ name: 'Folder', settings: { sourceFolder: 'guide' } });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
-    const editorTry = await t.http.post(`/api/doc-sets/${created.body.id}/snapshots/from-source`).set('Authorization', `Bearer ${await t.tokenFor('editor')}`);
+    const editorTry = await t.http
+      .post(`/api/doc-sets/${created.body.id}/snapshots/from-source`)
+      .set('Authorization', `Bearer ${await t.tokenFor('editor')}`);
     expect(editorTry.status).toBe(403);
     const response = await t.http.post(`/api/doc-sets/${created.body.id}/snapshots/from-source`).set('Authorization', `Bearer ${admin}`);
     expect(response.status, JSON.stringify(response.body)).toBe(202);
@@ -184,10 +196,15 @@ describe('snapshot import pipeline', () => {
     const kit = await importKit(t, await createDocSet(t, {}, 'Listing'));
     const a = await kit.importAndWait(await wellFormedZip({ 'index.md': '# A\n' }));
     const b = await kit.importAndWait(await wellFormedZip({ 'index.md': '# B\n' }));
-    const page = await t.http.get(`/api/doc-sets/${kit.docSetId}/snapshots?page=1&pageSize=1`).set('Authorization', `Bearer ${await t.tokenFor('viewer')}`);
+    const page = await t.http
+      .get(`/api/doc-sets/${kit.docSetId}/snapshots?page=1&pageSize=1`)
+      .set('Authorization', `Bearer ${await t.tokenFor('viewer')}`);
     expect(page.body).toMatchObject({ total: 2, page: 1, pageSize: 1, items: [{ id: b.id }] });
     expect(a.archiveSha256).toMatch(/^[0-9a-f]{64}$/);
-    const writer = await t.http.post(`/api/doc-sets/${kit.docSetId}/snapshots`).set('Authorization', `Bearer ${await t.tokenFor('writer')}`).attach('archive', Buffer.from('PK'), 'a.zip');
+    const writer = await t.http
+      .post(`/api/doc-sets/${kit.docSetId}/snapshots`)
+      .set('Authorization', `Bearer ${await t.tokenFor('writer')}`)
+      .attach('archive', Buffer.from('PK'), 'a.zip');
     expect(writer.status).toBe(403);
   });
 
@@ -213,7 +230,9 @@ describe('snapshot import pipeline', () => {
     const admin = await t.tokenFor('admin');
     // The registered seeder only schedules the work: boot (and health) never wait for three imports.
     const readyAtOnce = async () => {
-      const sets = (await t.http.get('/api/doc-sets').set('Authorization', `Bearer ${admin}`)).body.items.filter((d: { name: string }) => d.name === DEMO_DOC_SET_NAME);
+      const sets = (await t.http.get('/api/doc-sets').set('Authorization', `Bearer ${admin}`)).body.items.filter(
+        (d: { name: string }) => d.name === DEMO_DOC_SET_NAME,
+      );
       if (sets.length === 0) return 0;
       const list = (await t.http.get(`/api/doc-sets/${sets[0].id}/snapshots`).set('Authorization', `Bearer ${admin}`)).body.items;
       return list.filter((i: { status: string }) => i.status === 'ready').length;
@@ -223,12 +242,18 @@ describe('snapshot import pipeline', () => {
     let docSet: { id: string } | undefined;
     let items: Array<{ status: string; label: string; pageCount: number }> = [];
     for (const until = Date.now() + 120_000; Date.now() < until; await new Promise((r) => setTimeout(r, 200))) {
-      docSet = (await t.http.get('/api/doc-sets').set('Authorization', `Bearer ${admin}`)).body.items.find((d: { name: string }) => d.name === DEMO_DOC_SET_NAME);
+      docSet = (await t.http.get('/api/doc-sets').set('Authorization', `Bearer ${admin}`)).body.items.find(
+        (d: { name: string }) => d.name === DEMO_DOC_SET_NAME,
+      );
       if (!docSet) continue;
       items = (await t.http.get(`/api/doc-sets/${docSet.id}/snapshots`).set('Authorization', `Bearer ${admin}`)).body.items;
       if (items.length === 3 && items.every((i) => i.status === 'ready' || i.status === 'failed')) break;
     }
-    expect(items.map((i) => [i.label, i.status])).toEqual([['Version 3', 'ready'], ['Version 2', 'ready'], ['Version 1', 'ready']]);
+    expect(items.map((i) => [i.label, i.status])).toEqual([
+      ['Version 3', 'ready'],
+      ['Version 2', 'ready'],
+      ['Version 1', 'ready'],
+    ]);
     const markdownFiles = (v: 1 | 2 | 3) => Object.keys(generateDemoHandbook(v).files).filter((f) => f.endsWith('.md')).length;
     expect(items.map((i) => i.pageCount)).toEqual([markdownFiles(3), markdownFiles(2), markdownFiles(1)]);
   });
@@ -236,10 +261,33 @@ describe('snapshot import pipeline', () => {
   it('stores link flags exactly, quotes and backslashes included', async () => {
     const kit = await importKit(t, await createDocSet(t, {}, 'Flags'));
     const done = await kit.importAndWait(await wellFormedZip({ 'index.md': '# Home\n' }));
-    const [page] = (await t.app.get(DbService).db.execute(sql`SELECT id FROM pages WHERE snapshot_id = ${done.id}::uuid`) as unknown as { rows: { id: string }[] }).rows;
+    const [page] = (
+      (await t.app.get(DbService).db.execute(sql`SELECT id FROM pages WHERE snapshot_id = ${done.id}::uuid`)) as unknown as {
+        rows: { id: string }[];
+      }
+    ).rows;
     const flags = ['plain', 'say "hi"', 'back\\slash', '{braces},comma'];
-    await t.app.get(PageStoreRepository).insertLinks(done.id, [{ source_page_id: Number(page.id), line: 1, column: 1, href: 'x', kind: 'inline', status: 'broken', target_page_id: null, target_path: null, target_is_asset: false, anchor: null, reason: null, flags }]);
-    const stored = (await t.app.get(DbService).db.execute(sql`SELECT flags FROM links WHERE snapshot_id = ${done.id}::uuid`)) as unknown as { rows: { flags: string[] }[] };
+    await t.app
+      .get(PageStoreRepository)
+      .insertLinks(done.id, [
+        {
+          source_page_id: Number(page.id),
+          line: 1,
+          column: 1,
+          href: 'x',
+          kind: 'inline',
+          status: 'broken',
+          target_page_id: null,
+          target_path: null,
+          target_is_asset: false,
+          anchor: null,
+          reason: null,
+          flags,
+        },
+      ]);
+    const stored = (await t.app
+      .get(DbService)
+      .db.execute(sql`SELECT flags FROM links WHERE snapshot_id = ${done.id}::uuid`)) as unknown as { rows: { flags: string[] }[] };
     expect(stored.rows[0].flags).toEqual(flags);
   });
 
@@ -249,7 +297,9 @@ describe('snapshot import pipeline', () => {
     const admin = await importKit(t, docSetId, 'admin');
     const db = t.app.get(DbService).db;
     const adminCount = async () => {
-      const rows = (await db.execute(sql`SELECT count(*) AS n FROM snapshots s JOIN users u ON u.id = s.created_by WHERE u.role = 'admin'`)) as unknown as { rows: { n: string }[] };
+      const rows = (await db.execute(
+        sql`SELECT count(*) AS n FROM snapshots s JOIN users u ON u.id = s.created_by WHERE u.role = 'admin'`,
+      )) as unknown as { rows: { n: string }[] };
       return Number(rows.rows[0].n);
     };
     expect(t.config.importsPerHour).toBe(20);
@@ -266,14 +316,20 @@ describe('snapshot import pipeline', () => {
 });
 
 async function pageTitles(t: TestApp, snapshotId: string): Promise<Record<string, string>> {
-  const result = (await t.app.get(DbService).db.execute(sql`SELECT path, title FROM pages WHERE snapshot_id = ${snapshotId}::uuid`)) as unknown as { rows: { path: string; title: string }[] };
+  const result = (await t.app
+    .get(DbService)
+    .db.execute(sql`SELECT path, title FROM pages WHERE snapshot_id = ${snapshotId}::uuid`)) as unknown as {
+    rows: { path: string; title: string }[];
+  };
   return Object.fromEntries(result.rows.map((r) => [r.path, r.title]));
 }
 
 /** Pages and links by path (ids differ between snapshots), in a stable order. */
 async function contentOf(t: TestApp, snapshotId: string): Promise<unknown> {
   const db = t.app.get(DbService).db;
-  const pages = (await db.execute(sql`SELECT path, title, content_hash, word_count, facts, raw_links, text FROM pages WHERE snapshot_id = ${snapshotId}::uuid ORDER BY path`)) as unknown as { rows: unknown[] };
+  const pages = (await db.execute(
+    sql`SELECT path, title, content_hash, word_count, facts, raw_links, text FROM pages WHERE snapshot_id = ${snapshotId}::uuid ORDER BY path`,
+  )) as unknown as { rows: unknown[] };
   const links = (await db.execute(sql`
     SELECT s.path AS source, l.line, l."column", l.href, l.kind, l.status, tp.path AS target, l.target_path, l.anchor, l.flags
     FROM links l JOIN pages s ON s.id = l.source_page_id LEFT JOIN pages tp ON tp.id = l.target_page_id
@@ -292,7 +348,9 @@ async function linkGraphOf(t: TestApp, snapshotId: string) {
     SELECT DISTINCT s.path AS source, tp.path AS target FROM links l
     JOIN pages s ON s.id = l.source_page_id JOIN pages tp ON tp.id = l.target_page_id
     WHERE l.snapshot_id = ${snapshotId}::uuid AND l.status IN ('ok', 'redirected') AND tp.id <> s.id
-      AND s.snapshot_id = ${snapshotId}::uuid AND tp.snapshot_id = ${snapshotId}::uuid`)) as unknown as { rows: { source: string; target: string }[] };
+      AND s.snapshot_id = ${snapshotId}::uuid AND tp.snapshot_id = ${snapshotId}::uuid`)) as unknown as {
+    rows: { source: string; target: string }[];
+  };
   const problems = (await db.execute(sql`
     SELECT s.path AS source, l.href, l.status FROM links l JOIN pages s ON s.id = l.source_page_id
     WHERE l.snapshot_id = ${snapshotId}::uuid AND l.status IN ('broken', 'broken-anchor', 'ambiguous')`)) as unknown as {

@@ -22,7 +22,12 @@ describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
   beforeAll(async () => {
     t = await createTestApp();
     kit = await importKit(t, await createDocSet(t));
-    const first = await kit.importAndWait(await hostile.wellFormedZip({ 'docs/index.md': '# Welcome\n\nSee [guide](guide.md).\n', 'docs/guide.md': '# Guide\n\n[Home](index.md)\n' }));
+    const first = await kit.importAndWait(
+      await hostile.wellFormedZip({
+        'docs/index.md': '# Welcome\n\nSee [guide](guide.md).\n',
+        'docs/guide.md': '# Guide\n\n[Home](index.md)\n',
+      }),
+    );
     expect(first.status, JSON.stringify(first)).toBe('ready');
     baseline = await kit.state();
     expect(baseline.latestReady).toMatchObject({ pages: 2, links: 2 });
@@ -62,9 +67,11 @@ describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
 
   it('3: empty field name, missing boundary and a body cut mid-part are 400, and the server keeps answering', async () => {
     const url = `/api/doc-sets/${kit.docSetId}/snapshots`;
-    const raw = (contentType: string, body: string) => t.http.post(url).set('Authorization', `Bearer ${kit.token}`).set('Content-Type', contentType).send(body);
+    const raw = (contentType: string, body: string) =>
+      t.http.post(url).set('Authorization', `Bearer ${kit.token}`).set('Content-Type', contentType).send(body);
     const b = 'XyZboundary';
-    const part = (name: string) => `--${b}\r\nContent-Disposition: form-data; name="${name}"; filename="a.zip"\r\nContent-Type: application/zip\r\n\r\nPK\u0003\u0004abc\r\n`;
+    const part = (name: string) =>
+      `--${b}\r\nContent-Disposition: form-data; name="${name}"; filename="a.zip"\r\nContent-Type: application/zip\r\n\r\nPK\u0003\u0004abc\r\n`;
     const cases: Array<[string, string, string]> = [
       // multer CVE-2025-48997 (GHSA-g5hg-p3ph-g8qg): an empty field name crashed the process before 2.0.1.
       ['empty field name', `multipart/form-data; boundary=${b}`, `${part('')}--${b}--\r\n`],
@@ -117,7 +124,8 @@ describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
     }
     // Check 8: nothing was written beside or above the upload folder.
     expect(await listTree(t.config.dataDir)).toEqual(before);
-    for (const escaped of ['x.md', '../x.md', '../../outside/escape.md', 'abs.md']) expect(existsSync(join(uploadDirOf(t.config), escaped))).toBe(false);
+    for (const escaped of ['x.md', '../x.md', '../../outside/escape.md', 'abs.md'])
+      expect(existsSync(join(uploadDirOf(t.config), escaped))).toBe(false);
   });
 
   it('10, 16: bombs refused from declared sizes: nothing inflated, quick, memory flat', async () => {

@@ -21,7 +21,8 @@ describe('the link map', () => {
     expect(response.status).toBe(200);
     expect(response.body.level).toBe('pages');
     expect(response.body.nodes).toHaveLength(HANDBOOK_PAGES.length);
-    const edge = (s: string, d: string) => response.body.edges.find((e: { source: string; target: string }) => e.source === s && e.target === d);
+    const edge = (s: string, d: string) =>
+      response.body.edges.find((e: { source: string; target: string }) => e.source === s && e.target === d);
     // install.md links to advanced.md twice (once directly, once through a redirect): one edge of weight 2.
     expect(edge('tools/install.md', 'tools/advanced.md')?.weight).toBe(2);
     expect(edge('swap/left.md', 'swap/right.md')?.weight).toBe(1);
@@ -37,12 +38,9 @@ describe('the link map', () => {
     expect(folders.body.level).toBe('pages'); // 9 pages fit in 10
     const grouped = await read(t, `/api/doc-sets/${docSetId}/runs/latest/graph?limit=10&folderDepth=1&folder=`);
     expect(grouped.body.totalPages).toBe(9);
-    const tight = await t.app.get((await import('./link-map.service.js')).LinkMapService).graph(
-      { id: 'x', email: 'x', name: 'x', role: 'viewer' },
-      docSetId,
-      'latest',
-      { folder: '', folderDepth: 1, limit: 5 },
-    );
+    const tight = await t.app
+      .get((await import('./link-map.service.js')).LinkMapService)
+      .graph({ id: 'x', email: 'x', name: 'x', role: 'viewer' }, docSetId, 'latest', { folder: '', folderDepth: 1, limit: 5 });
     expect(tight.level).toBe('folders');
     if (tight.level !== 'folders') return;
     const ids = tight.nodes.map((n) => n.id).sort();
@@ -55,7 +53,12 @@ describe('the link map', () => {
     expect(tight.edges.some((e) => e.source === 'swap/' && e.target === 'swap/')).toBe(false);
     const drill = await read(t, `/api/doc-sets/${docSetId}/runs/latest/graph?folder=tools`);
     expect(drill.body.level).toBe('pages');
-    expect(drill.body.nodes.map((n: { path: string }) => n.path).sort()).toEqual(['tools/advanced.md', 'tools/deep/hubs.md', 'tools/install.md', 'tools/setup.md']);
+    expect(drill.body.nodes.map((n: { path: string }) => n.path).sort()).toEqual([
+      'tools/advanced.md',
+      'tools/deep/hubs.md',
+      'tools/install.md',
+      'tools/setup.md',
+    ]);
   });
 
   it('rejects bad parameters', async () => {

@@ -8,7 +8,12 @@ import { LinkMapService } from './link-map.service.js';
 
 const mapQuerySchema = z
   .object({
-    folder: z.string().trim().max(512).regex(/^[^\0]*$/).default(''),
+    folder: z
+      .string()
+      .trim()
+      .max(512)
+      .regex(/^[^\0]*$/)
+      .default(''),
     folderDepth: z.coerce.number().int().min(1).max(5).default(1),
     limit: z.coerce.number().int().min(10).max(1000).default(300),
   })

@@ -38,7 +38,9 @@ export class LinkMapRepository {
   }
 
   async countPages(runId: string, prefix: string): Promise<number> {
-    const result = await this.database.db.execute(sql`select count(*)::int as n from page_metrics pm where pm.run_id = ${runId} and pm.path like ${startsWith(prefix)}`);
+    const result = await this.database.db.execute(
+      sql`select count(*)::int as n from page_metrics pm where pm.run_id = ${runId} and pm.path like ${startsWith(prefix)}`,
+    );
     return this.rows<{ n: number }>(result)[0].n;
   }
 
@@ -60,7 +62,11 @@ export class LinkMapRepository {
       where l.snapshot_id = ${snapshotId} and l.status in ('ok', 'redirected') and l.target_is_asset = false
         and l.source_page_id = any(${ids}) and l.target_page_id = any(${ids}) and l.source_page_id <> l.target_page_id
       group by 1, 2`);
-    return this.rows<{ source: number; target: number; weight: number }>(result).map((r) => ({ source: Number(r.source), target: Number(r.target), weight: r.weight }));
+    return this.rows<{ source: number; target: number; weight: number }>(result).map((r) => ({
+      source: Number(r.source),
+      target: Number(r.target),
+      weight: r.weight,
+    }));
   }
 
   async folderGroups(runId: string, prefix: string, depth: number) {
@@ -70,7 +76,15 @@ export class LinkMapRepository {
              sum(case when pm.reachable then 0 else 1 end)::int as unreachable, sum(case when pm.deep then 1 else 0 end)::int as deep
       from page_metrics pm where pm.run_id = ${runId} and pm.path like ${startsWith(prefix)}
       group by 1 order by 3 desc`);
-    return this.rows<{ key: string; pageCount: number; stationaryScore: number; orphans: number; deadEnds: number; unreachable: number; deep: number }>(result);
+    return this.rows<{
+      key: string;
+      pageCount: number;
+      stationaryScore: number;
+      orphans: number;
+      deadEnds: number;
+      unreachable: number;
+      deep: number;
+    }>(result);
   }
 
   async folderEdges(runId: string, snapshotId: string, prefix: string, depth: number, limit: number) {

@@ -10,7 +10,9 @@ export interface MapQuery {
 }
 
 function pageFlags(p: MapPageRow): string[] {
-  return [p.orphan && 'orphan', p.deadEnd && 'dead-end', !p.reachable && 'unreachable', p.deep && 'deep', p.island && 'island'].filter(Boolean) as string[];
+  return [p.orphan && 'orphan', p.deadEnd && 'dead-end', !p.reachable && 'unreachable', p.deep && 'deep', p.island && 'island'].filter(
+    Boolean,
+  ) as string[];
 }
 
 /**
@@ -31,13 +33,23 @@ export class LinkMapService {
     if (total <= query.limit) {
       const pages = await this.repository.topPages(run.id, prefix, query.limit);
       const byId = new Map(pages.map((p) => [p.pageId, p.path]));
-      const edges = await this.repository.edgesAmong(run.snapshotId, pages.map((p) => p.pageId));
+      const edges = await this.repository.edgesAmong(
+        run.snapshotId,
+        pages.map((p) => p.pageId),
+      );
       return {
         runId: run.id,
         level: 'pages' as const,
         folder: query.folder,
         totalPages: total,
-        nodes: pages.map((p) => ({ id: p.path, label: p.title, path: p.path, size: p.stationaryScore, stationaryScore: p.stationaryScore, flags: pageFlags(p) })),
+        nodes: pages.map((p) => ({
+          id: p.path,
+          label: p.title,
+          path: p.path,
+          size: p.stationaryScore,
+          stationaryScore: p.stationaryScore,
+          flags: pageFlags(p),
+        })),
         edges: edges.map((e) => ({ source: byId.get(e.source)!, target: byId.get(e.target)!, weight: e.weight })),
       };
     }
@@ -56,7 +68,9 @@ export class LinkMapService {
         size: Number(g.stationaryScore),
         stationaryScore: Number(g.stationaryScore),
         pageCount: g.pageCount,
-        flags: [g.orphans && 'orphan', g.deadEnds && 'dead-end', g.unreachable && 'unreachable', g.deep && 'deep'].filter(Boolean) as string[],
+        flags: [g.orphans && 'orphan', g.deadEnds && 'dead-end', g.unreachable && 'unreachable', g.deep && 'deep'].filter(
+          Boolean,
+        ) as string[],
         findingCounts: { orphans: g.orphans, deadEnds: g.deadEnds, unreachable: g.unreachable, deep: g.deep },
       })),
       edges: edges.map((e) => ({ source: nodeId(e.source), target: nodeId(e.target), weight: e.weight })),

@@ -34,14 +34,17 @@ export class LocalMailboxServer {
               bytes: 0,
             }),
           )
-          .then(() => callback(), (error: Error) => callback(error));
+          .then(
+            () => callback(),
+            (error: Error) => callback(error),
+          );
       },
     });
     await new Promise<void>((resolve, reject) => {
       this.server!.once('error', reject);
       this.server!.listen(port, '127.0.0.1', () => resolve());
     });
-    this.port = ((this.server as unknown as { server: { address(): AddressInfo } }).server.address()).port;
+    this.port = (this.server as unknown as { server: { address(): AddressInfo } }).server.address().port;
     this.logger.log(`Local mailbox listening on 127.0.0.1:${this.port}; admins read it in the app under Mail.`);
     return this.port;
   }

@@ -10,7 +10,10 @@ export interface OutgoingMail {
 }
 
 export class MailDeliveryError extends Error {
-  constructor(message: string, readonly permanent: boolean) {
+  constructor(
+    message: string,
+    readonly permanent: boolean,
+  ) {
     super(message);
   }
 }

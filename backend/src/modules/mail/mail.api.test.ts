@@ -15,7 +15,15 @@ describe('the built-in local mailbox', () => {
 
   it('catches an outbox message and shows it to admins only, with text and HTML', async () => {
     const mail = t.app.get(MailService);
-    await mail.enqueue([{ kind: 'test', toAddress: 'writer@demo.linkloom.test', subject: 'Hello\r\nBcc: victim@example.com', text: 'plain body', html: '<p>html body</p>' }]);
+    await mail.enqueue([
+      {
+        kind: 'test',
+        toAddress: 'writer@demo.linkloom.test',
+        subject: 'Hello\r\nBcc: victim@example.com',
+        text: 'plain body',
+        html: '<p>html body</p>',
+      },
+    ]);
     expect(await mail.deliverDue()).toBe(1);
     const admin = await t.tokenFor('admin');
     const list = await t.http.get('/api/mail').set('Authorization', `Bearer ${admin}`);
@@ -28,7 +36,9 @@ describe('the built-in local mailbox', () => {
     expect(message.body.html).toContain('<p>html body</p>');
     expect((await t.http.get('/api/mail').set('Authorization', `Bearer ${await t.tokenFor('editor')}`)).status).toBe(403);
     const outbox = await t.http.get('/api/outbox?status=sent').set('Authorization', `Bearer ${admin}`);
-    expect(outbox.body.items.map((i: { messageId: string }) => i.messageId)).toEqual([expect.stringMatching(/^<[0-9a-f-]+@linkloom\.local>$/)]);
+    expect(outbox.body.items.map((i: { messageId: string }) => i.messageId)).toEqual([
+      expect.stringMatching(/^<[0-9a-f-]+@linkloom\.local>$/),
+    ]);
   });
 
   it('refuses crafted addresses that would add recipients (GHSA-mm7p-fcc7-pg87)', async () => {
@@ -57,7 +67,7 @@ async function fakeSmtp(port = 0, reply?: () => Error | null) {
     },
   });
   await new Promise<void>((resolve) => server.listen(port, '127.0.0.1', () => resolve()));
-  const actual = ((server as unknown as { server: { address(): AddressInfo } }).server.address()).port;
+  const actual = (server as unknown as { server: { address(): AddressInfo } }).server.address().port;
   return { port: actual, received, close: () => new Promise<void>((r) => server.close(() => r())) };
 }
 
@@ -92,7 +102,9 @@ describe('the durable outbox with a real SMTP server', () => {
 
   it('marks a message failed on a permanent 5xx reply and retries a temporary 4xx one (RFC 5321 section 4.2.1)', async () => {
     let answer: 'temporary' | 'permanent' = 'temporary';
-    const server = await fakeSmtp(0, () => Object.assign(new Error(answer === 'temporary' ? 'try later' : 'no such user'), { responseCode: answer === 'temporary' ? 451 : 550 }));
+    const server = await fakeSmtp(0, () =>
+      Object.assign(new Error(answer === 'temporary' ? 'try later' : 'no such user'), { responseCode: answer === 'temporary' ? 451 : 550 }),
+    );
     const t = await createTestApp({ smtpUrl: `smtp://127.0.0.1:${server.port}`, mailPollMs: 60_000, mailRetryBaseSeconds: 1 });
     try {
       const mail = t.app.get(MailService);

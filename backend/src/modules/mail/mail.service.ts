@@ -37,7 +37,8 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
 
   async onApplicationBootstrap(): Promise<void> {
     const requeued = await this.outbox.requeueInterrupted();
-    if (requeued) this.logger.warn(`${requeued} message(s) were being sent when the server stopped; they will be sent again with the same Message-ID.`);
+    if (requeued)
+      this.logger.warn(`${requeued} message(s) were being sent when the server stopped; they will be sent again with the same Message-ID.`);
     if (this.config.smtpUrl) {
       this.transport = new MailTransport(this.config.smtpUrl);
     } else {
@@ -61,7 +62,8 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
     const rows = messages
       .filter((m) => {
         const ok = isPlainAddress(m.toAddress);
-        if (!ok) this.logger.warn(`Skipped an e-mail to an address that is not a plain address: ${JSON.stringify(m.toAddress).slice(0, 80)}`);
+        if (!ok)
+          this.logger.warn(`Skipped an e-mail to an address that is not a plain address: ${JSON.stringify(m.toAddress).slice(0, 80)}`);
         return ok;
       })
       .map(({ dedupeKey, ...m }) => {
@@ -90,7 +92,14 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
 
   private async deliver(row: OutboxRow): Promise<boolean> {
     try {
-      await this.transport!.send({ messageId: row.messageId, from: this.config.mailFrom, to: row.toAddress, subject: row.subject, text: row.text, html: row.html });
+      await this.transport!.send({
+        messageId: row.messageId,
+        from: this.config.mailFrom,
+        to: row.toAddress,
+        subject: row.subject,
+        text: row.text,
+        html: row.html,
+      });
       await this.outbox.markSent(row.id);
       return true;
     } catch (error) {
@@ -107,7 +116,11 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
     }
   }
 
-  async listOutbox(status: OutboxRow['status'] | undefined, page: number, pageSize: number): Promise<ListResult<Omit<OutboxRow, 'text' | 'html'>>> {
+  async listOutbox(
+    status: OutboxRow['status'] | undefined,
+    page: number,
+    pageSize: number,
+  ): Promise<ListResult<Omit<OutboxRow, 'text' | 'html'>>> {
     const { rows, total } = await this.outbox.list(status, (page - 1) * pageSize, pageSize);
     return { items: rows.map(({ text: _t, html: _h, ...rest }) => rest), total, page, pageSize };
   }
@@ -116,7 +129,14 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
     this.requireMailbox();
     const { rows, total } = await this.mailboxMessages.list((page - 1) * pageSize, pageSize);
     return {
-      items: rows.map((r) => ({ id: r.id, messageId: r.messageId, from: r.fromAddress, to: r.toAddresses, subject: r.subject, receivedAt: r.receivedAt.toISOString() })),
+      items: rows.map((r) => ({
+        id: r.id,
+        messageId: r.messageId,
+        from: r.fromAddress,
+        to: r.toAddresses,
+        subject: r.subject,
+        receivedAt: r.receivedAt.toISOString(),
+      })),
       total,
       page,
       pageSize,
@@ -127,12 +147,25 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
     this.requireMailbox();
     const row = await this.mailboxMessages.findById(id);
     if (!row) throw notFound('The message');
-    return { id: row.id, messageId: row.messageId, from: row.fromAddress, to: row.toAddresses, subject: row.subject, receivedAt: row.receivedAt.toISOString(), text: row.text, html: row.html };
+    return {
+      id: row.id,
+      messageId: row.messageId,
+      from: row.fromAddress,
+      to: row.toAddresses,
+      subject: row.subject,
+      receivedAt: row.receivedAt.toISOString(),
+      text: row.text,
+      html: row.html,
+    };
   }
 
   private requireMailbox(): void {
     if (!this.usesLocalMailbox) {
-      throw new AppError(404, 'MAILBOX_OFF', 'The local mailbox is off because mail goes through SMTP_URL; read the messages in that mail system.');
+      throw new AppError(
+        404,
+        'MAILBOX_OFF',
+        'The local mailbox is off because mail goes through SMTP_URL; read the messages in that mail system.',
+      );
     }
   }
 }

@@ -15,7 +15,14 @@ export class MailboxRepository {
 
   async list(offset: number, limit: number) {
     const rows = await this.database.db
-      .select({ id: mailboxMessages.id, messageId: mailboxMessages.messageId, toAddresses: mailboxMessages.toAddresses, subject: mailboxMessages.subject, receivedAt: mailboxMessages.receivedAt, fromAddress: mailboxMessages.fromAddress })
+      .select({
+        id: mailboxMessages.id,
+        messageId: mailboxMessages.messageId,
+        toAddresses: mailboxMessages.toAddresses,
+        subject: mailboxMessages.subject,
+        receivedAt: mailboxMessages.receivedAt,
+        fromAddress: mailboxMessages.fromAddress,
+      })
       .from(mailboxMessages)
       .orderBy(desc(mailboxMessages.receivedAt))
       .offset(offset)

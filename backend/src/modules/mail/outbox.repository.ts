@@ -5,7 +5,10 @@ import type { Executor } from '../../db/database.js';
 import { outbox } from '../../db/schema/index.js';
 
 export type OutboxRow = typeof outbox.$inferSelect;
-export type NewOutboxMessage = Pick<OutboxRow, 'kind' | 'toAddress' | 'subject' | 'text' | 'html'> & { docSetId?: string | null; dedupeKey?: string };
+export type NewOutboxMessage = Pick<OutboxRow, 'kind' | 'toAddress' | 'subject' | 'text' | 'html'> & {
+  docSetId?: string | null;
+  dedupeKey?: string;
+};
 
 @Injectable()
 export class OutboxRepository {
@@ -26,7 +29,10 @@ export class OutboxRepository {
       returning id`);
     const ids = (result as unknown as { rows: { id: string }[] }).rows.map((r) => r.id);
     if (ids.length === 0) return [];
-    return this.database.db.select().from(outbox).where(sql`${outbox.id} in ${ids}`);
+    return this.database.db
+      .select()
+      .from(outbox)
+      .where(sql`${outbox.id} in ${ids}`);
   }
 
   async markSent(id: string): Promise<void> {
@@ -43,7 +49,11 @@ export class OutboxRepository {
 
   /** After a crash, messages caught in `sending` go back to the queue (sent again with the same Message-ID). */
   async requeueInterrupted(): Promise<number> {
-    const rows = await this.database.db.update(outbox).set({ status: 'pending' }).where(eq(outbox.status, 'sending')).returning({ id: outbox.id });
+    const rows = await this.database.db
+      .update(outbox)
+      .set({ status: 'pending' })
+      .where(eq(outbox.status, 'sending'))
+      .returning({ id: outbox.id });
     return rows.length;
   }
 

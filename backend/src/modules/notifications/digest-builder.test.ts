@@ -23,7 +23,11 @@ describe('the nightly digest', () => {
 
   it('carries the same numbers in the subject, text and HTML, and lists at most ten items', () => {
     const appeared = Array.from({ length: 12 }, (_, i) => `guide/p${i}.md -> missing.md`);
-    const mail = buildDigest({ ...base, changes: [{ label: 'Broken links', appeared, appearedTotal: 12, disappeared: ['a.md -> b.md'], disappearedTotal: 1 }], pruningWaiting: 2 });
+    const mail = buildDigest({
+      ...base,
+      changes: [{ label: 'Broken links', appeared, appearedTotal: 12, disappeared: ['a.md -> b.md'], disappearedTotal: 1 }],
+      pruningWaiting: 2,
+    });
     expect(mail.subject).toContain('Broken links +11');
     expect(mail.text).toContain('Broken links: 12 new, 1 gone');
     expect(mail.html).toContain('Broken links: 12 new, 1 gone');
@@ -33,7 +37,13 @@ describe('the nightly digest', () => {
   });
 
   it('escapes page paths and titles in the HTML part', () => {
-    const mail = buildDigest({ ...base, docSetName: '<script>x</script>', changes: [{ label: 'Orphan pages', appeared: ['<img src=x onerror=alert(1)>.md'], appearedTotal: 1, disappeared: [], disappearedTotal: 0 }] });
+    const mail = buildDigest({
+      ...base,
+      docSetName: '<script>x</script>',
+      changes: [
+        { label: 'Orphan pages', appeared: ['<img src=x onerror=alert(1)>.md'], appearedTotal: 1, disappeared: [], disappearedTotal: 0 },
+      ],
+    });
     expect(mail.html).not.toContain('<script>');
     expect(mail.html).not.toContain('<img');
     expect(mail.html).toContain('&lt;img src=x onerror=alert(1)&gt;.md');

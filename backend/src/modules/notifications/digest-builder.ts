@@ -40,8 +40,15 @@ export function buildDigest(input: DigestInput): DigestMail {
   const headline = changed.map((c) => `${c.label} ${sign(c.appearedTotal - c.disappearedTotal)}`).join(', ');
   const subject = `Linkloom nightly: ${input.docSetName} — ${nothingChanged ? 'nothing changed' : headline || 'scores moved'}`;
 
-  const text: string[] = [`Nightly run of ${input.docSetName} (${input.pageCount} pages), finished ${input.finishedAt}.`, `Open it: ${input.runUrl}`, ''];
-  const html: string[] = [`<h2>${escapeHtml(input.docSetName)}: nightly run</h2>`, `<p>${input.pageCount} pages, finished ${escapeHtml(input.finishedAt)}. <a href="${escapeHtml(input.runUrl)}">Open the run in Linkloom</a>.</p>`];
+  const text: string[] = [
+    `Nightly run of ${input.docSetName} (${input.pageCount} pages), finished ${input.finishedAt}.`,
+    `Open it: ${input.runUrl}`,
+    '',
+  ];
+  const html: string[] = [
+    `<h2>${escapeHtml(input.docSetName)}: nightly run</h2>`,
+    `<p>${input.pageCount} pages, finished ${escapeHtml(input.finishedAt)}. <a href="${escapeHtml(input.runUrl)}">Open the run in Linkloom</a>.</p>`,
+  ];
   if (nothingChanged) {
     text.push('Nothing changed since the previous run.');
     html.push('<p>Nothing changed since the previous run.</p>');
@@ -49,24 +56,41 @@ export function buildDigest(input: DigestInput): DigestMail {
   for (const change of changed) {
     text.push(`${change.label}: ${change.appearedTotal} new, ${change.disappearedTotal} gone`);
     html.push(`<h3>${escapeHtml(change.label)}: ${change.appearedTotal} new, ${change.disappearedTotal} gone</h3>`);
-    for (const [word, items, total] of [['new', change.appeared, change.appearedTotal], ['gone', change.disappeared, change.disappearedTotal]] as const) {
+    for (const [word, items, total] of [
+      ['new', change.appeared, change.appearedTotal],
+      ['gone', change.disappeared, change.disappearedTotal],
+    ] as const) {
       if (total === 0) continue;
       const shown = items.slice(0, LIST_LIMIT);
       const more = total > shown.length ? ` and ${total - shown.length} more` : '';
       text.push(...shown.map((item) => `  ${word}: ${item}`), ...(more ? [`  ${more.trim()}`] : []));
-      html.push(`<p>${word}:</p><ul>${shown.map((item) => `<li>${escapeHtml(item)}</li>`).join('')}${more ? `<li>${escapeHtml(more.trim())}</li>` : ''}</ul>`);
+      html.push(
+        `<p>${word}:</p><ul>${shown.map((item) => `<li>${escapeHtml(item)}</li>`).join('')}${more ? `<li>${escapeHtml(more.trim())}</li>` : ''}</ul>`,
+      );
     }
   }
   if (input.scoreMoves.length) {
     text.push('', 'Largest score moves (times the average):');
     text.push(...input.scoreMoves.map((m) => `  ${m.path}: ${m.before.toFixed(2)} -> ${m.after.toFixed(2)}`));
-    html.push('<h3>Largest score moves (times the average)</h3><ul>', ...input.scoreMoves.map((m) => `<li>${escapeHtml(m.path)}: ${m.before.toFixed(2)} → ${m.after.toFixed(2)}</li>`), '</ul>');
+    html.push(
+      '<h3>Largest score moves (times the average)</h3><ul>',
+      ...input.scoreMoves.map((m) => `<li>${escapeHtml(m.path)}: ${m.before.toFixed(2)} → ${m.after.toFixed(2)}</li>`),
+      '</ul>',
+    );
   }
-  const work: [string, string[]][] = [['Tasks verified by this run', input.tasksVerified], ['Tasks overdue', input.tasksOverdue]];
+  const work: [string, string[]][] = [
+    ['Tasks verified by this run', input.tasksVerified],
+    ['Tasks overdue', input.tasksOverdue],
+  ];
   for (const [label, items] of work) {
     if (items.length === 0) continue;
     text.push('', `${label}: ${items.length}`, ...items.slice(0, LIST_LIMIT).map((i) => `  ${i}`));
-    html.push(`<h3>${label}: ${items.length}</h3><ul>${items.slice(0, LIST_LIMIT).map((i) => `<li>${escapeHtml(i)}</li>`).join('')}</ul>`);
+    html.push(
+      `<h3>${label}: ${items.length}</h3><ul>${items
+        .slice(0, LIST_LIMIT)
+        .map((i) => `<li>${escapeHtml(i)}</li>`)
+        .join('')}</ul>`,
+    );
   }
   if (input.pruningWaiting > 0) {
     text.push('', `Pruning decisions waiting: ${input.pruningWaiting}`);

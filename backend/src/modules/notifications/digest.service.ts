@@ -50,7 +50,12 @@ export class DigestService {
     const run = await this.runs.resolve(SYSTEM, docSetId, runId);
     const docSet = await this.docSets.get(docSetId);
     const previous = await this.facts.previousFinishedRun(docSetId, run.id);
-    const diff = previous ? ((await this.findings.diff(run, previous as never)) as { kinds: DiffKinds; scoreMoves: { path: string; before: number; after: number }[] }) : null;
+    const diff = previous
+      ? ((await this.findings.diff(run, previous as never)) as {
+          kinds: DiffKinds;
+          scoreMoves: { path: string; before: number; after: number }[];
+        })
+      : null;
     const pageCount = run.counts?.pages ?? 0;
     const changes: DigestChange[] = DIGEST_KINDS.map(([kind, label]) => {
       const entry = diff?.kinds[kind];
@@ -79,7 +84,15 @@ export class DigestService {
     });
     const recipients = (await this.subscriptions.digestRecipients(docSetId)).filter((r) => !digest.nothingChanged || r.nothingChanged);
     await this.mail.enqueue(
-      recipients.map((r) => ({ kind: 'digest', toAddress: r.email, subject: digest.subject, text: digest.text, html: digest.html, docSetId, dedupeKey: `digest-${run.id}-${r.userId}` })),
+      recipients.map((r) => ({
+        kind: 'digest',
+        toAddress: r.email,
+        subject: digest.subject,
+        text: digest.text,
+        html: digest.html,
+        docSetId,
+        dedupeKey: `digest-${run.id}-${r.userId}`,
+      })),
     );
     this.logger.log(`Digest of run ${run.id} queued for ${recipients.length} subscriber(s)`);
     return recipients.length;

@@ -26,7 +26,10 @@ export class SubscriptionsRepository {
         await tx
           .insert(subscriptions)
           .values({ userId, ...c })
-          .onConflictDoUpdate({ target: [subscriptions.userId, subscriptions.docSetId], set: { digest: c.digest, nothingChanged: c.nothingChanged } });
+          .onConflictDoUpdate({
+            target: [subscriptions.userId, subscriptions.docSetId],
+            set: { digest: c.digest, nothingChanged: c.nothingChanged },
+          });
       }
     });
   }

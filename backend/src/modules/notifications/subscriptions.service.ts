@@ -12,7 +12,9 @@ export class SubscriptionsService {
   async get(user: AuthUser): Promise<{ subscriptions: SubscriptionChoice[] }> {
     const stored = new Map((await this.repository.forUser(user.id)).map((s) => [s.docSetId, s]));
     const byDefault = roleAtLeast(user.role, 'editor');
-    const subscriptions = (await this.repository.docSetIds()).map((docSetId) => stored.get(docSetId) ?? { docSetId, digest: byDefault, nothingChanged: false });
+    const subscriptions = (await this.repository.docSetIds()).map(
+      (docSetId) => stored.get(docSetId) ?? { docSetId, digest: byDefault, nothingChanged: false },
+    );
     return { subscriptions };
   }
 

@@ -17,13 +17,23 @@ export function toCsv(header: string[], rows: (string | number | boolean | null 
 
 /** `attachment` with an ASCII fallback name (no quotes, backslashes or control characters) and the UTF-8 name. */
 export function contentDisposition(fileName: string): string {
-  const ascii = fileName.normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^\x20-\x7e]/g, '_').replace(/["\\]/g, '_').replace(/[\r\n]/g, '_');
+  const ascii = fileName
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .replace(/[^\x20-\x7e]/g, '_')
+    .replace(/["\\]/g, '_')
+    .replace(/[\r\n]/g, '_');
   const encoded = encodeURIComponent(fileName).replace(/['()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
   return `attachment; filename="${ascii}"; filename*=UTF-8''${encoded}`;
 }
 
 /** A file-name-safe slug of the doc set name for export file names. */
 export function exportFileName(docSetName: string, extension: 'csv' | 'txt'): string {
-  const slug = docSetName.trim().replace(/[\s/\\:*?"<>|]+/g, '-').replace(/-+/g, '-').slice(0, 80) || 'doc-set';
+  const slug =
+    docSetName
+      .trim()
+      .replace(/[\s/\\:*?"<>|]+/g, '-')
+      .replace(/-+/g, '-')
+      .slice(0, 80) || 'doc-set';
   return `pruning-approved-${slug}.${extension}`;
 }

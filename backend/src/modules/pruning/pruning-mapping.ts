@@ -16,6 +16,15 @@ export function toPruningItem(row: CandidateWithDecision, nominations: Nominatio
     reviewedAt: row.reviewedAt,
     firstProposedAt: row.firstProposedAt.toISOString(),
     nominations: nominations.map((n) => ({ by: n.nominatedByName, reason: n.reason, at: n.at.toISOString() })),
-    decision: d ? { decision: d.decision, note: d.note, by: d.decidedByName, at: d.decidedAt.toISOString(), flagged: !!d.flaggedAt, flagReason: d.flagReason } : null,
+    decision: d
+      ? {
+          decision: d.decision,
+          note: d.note,
+          by: d.decidedByName,
+          at: d.decidedAt.toISOString(),
+          flagged: !!d.flaggedAt,
+          flagReason: d.flagReason,
+        }
+      : null,
   };
 }

@@ -45,29 +45,71 @@ export class PruningRefreshService implements OnModuleInit {
     const nominations = await this.repository.nominations(docSetId);
     const previous = new Set((await this.repository.candidates(docSetId)).map((c) => c.path));
     const paths = new Set([...proposed.keys(), ...decisions.map((d) => d.path), ...nominations.map((n) => n.path)]);
-    const rows = [...paths].map((path) => candidateRow(docSetId, runId, path, pages.get(path), proposed.get(path) ?? [], nominations.filter((n) => n.path === path)));
+    const rows = [...paths].map((path) =>
+      candidateRow(
+        docSetId,
+        runId,
+        path,
+        pages.get(path),
+        proposed.get(path) ?? [],
+        nominations.filter((n) => n.path === path),
+      ),
+    );
     const decided = new Set(decisions.map((d) => d.path));
     const fresh = [...proposed.keys()].filter((p) => !previous.has(p) && !decided.has(p));
-    const regained = decisions.filter((d) => d.decision === 'approve' && !d.flaggedAt && (pages.get(d.path)?.inboundCount ?? 0) > (d.inboundAtDecision ?? 0));
-    const editors = fresh.length ? (await this.users.list(0, 500)).rows.filter((u) => !u.disabled && (u.role === 'editor' || u.role === 'admin')) : [];
+    const regained = decisions.filter(
+      (d) => d.decision === 'approve' && !d.flaggedAt && (pages.get(d.path)?.inboundCount ?? 0) > (d.inboundAtDecision ?? 0),
+    );
+    const editors = fresh.length
+      ? (await this.users.list(0, 500)).rows.filter((u) => !u.disabled && (u.role === 'editor' || u.role === 'admin'))
+      : [];
     await this.database.db.transaction(async (tx) => {
       await this.repository.replaceCandidates(docSetId, rows, tx);
       await this.repository.advanceVersion(docSetId, null, tx, runId);
       for (const d of regained) {
         const reason = `The run of ${now.toISOString().slice(0, 10)} found ${pages.get(d.path)!.inboundCount} inbound link(s); there were ${d.inboundAtDecision ?? 0} when it was approved.`;
         await this.repository.flagDecision(docSetId, d.path, reason, tx);
-        await this.audit.record(null, 'pruning.flagged', 'pruning-page', `${docSetId}:${d.path}`, { path: d.path, runId, reason }, { docSetId, executor: tx });
+        await this.audit.record(
+          null,
+          'pruning.flagged',
+          'pruning-page',
+          `${docSetId}:${d.path}`,
+          { path: d.path, runId, reason },
+          { docSetId, executor: tx },
+        );
       }
-      if (fresh.length) await this.mail.enqueue(editors.map((e) => pruningWaitingMail(e, docSet, fresh, this.config.publicUrl)), tx);
+      if (fresh.length)
+        await this.mail.enqueue(
+          editors.map((e) => pruningWaitingMail(e, docSet, fresh, this.config.publicUrl)),
+          tx,
+        );
     });
     return fresh;
   }
 }
 
-function candidateRow(docSetId: string, runId: string, path: string, page: PageFinding | undefined, reasons: PruningReason[], nominations: { nominatedByName: string; reason: string }[]): NewCandidate {
-  const nominated: PruningReason[] = nominations.map((n) => ({ rule: 'nominated', detail: `Nominated by ${n.nominatedByName}: ${n.reason}` }));
+function candidateRow(
+  docSetId: string,
+  runId: string,
+  path: string,
+  page: PageFinding | undefined,
+  reasons: PruningReason[],
+  nominations: { nominatedByName: string; reason: string }[],
+): NewCandidate {
+  const nominated: PruningReason[] = nominations.map((n) => ({
+    rule: 'nominated',
+    detail: `Nominated by ${n.nominatedByName}: ${n.reason}`,
+  }));
   return {
-    docSetId, path, runId, title: page?.title ?? path, reasons: [...reasons, ...nominated], inboundCount: page?.inboundCount ?? null,
-    stationaryScore: page?.stationaryScore ?? null, wordCount: page?.wordCount ?? null, reviewedAt: page?.reviewedAt ?? null, inLatestRun: !!page,
+    docSetId,
+    path,
+    runId,
+    title: page?.title ?? path,
+    reasons: [...reasons, ...nominated],
+    inboundCount: page?.inboundCount ?? null,
+    stationaryScore: page?.stationaryScore ?? null,
+    wordCount: page?.wordCount ?? null,
+    reviewedAt: page?.reviewedAt ?? null,
+    inLatestRun: !!page,
   };
 }

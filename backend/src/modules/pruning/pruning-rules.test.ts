@@ -4,7 +4,16 @@ import { isProtected, percentileThreshold, type PruningPage, proposeCandidates }
 const settings = { lowScorePercentile: 20, staleDays: 365, thinWordCount: 80, protectGlobs: ['legal/**', '**/index.md'] };
 const now = new Date('2026-06-01T00:00:00Z');
 const page = (path: string, over: Partial<PruningPage> = {}): PruningPage => ({
-  path, title: path, orphan: false, reachable: true, stationaryScore: 0.5, inboundCount: 3, wordCount: 500, reviewedAt: null, protected: false, ...over,
+  path,
+  title: path,
+  orphan: false,
+  reachable: true,
+  stationaryScore: 0.5,
+  inboundCount: 3,
+  wordCount: 500,
+  reviewedAt: null,
+  protected: false,
+  ...over,
 });
 
 describe('percentileThreshold (nearest rank)', () => {

@@ -53,15 +53,24 @@ export function pruningReasons(page: PruningPage, settings: PruningRuleSettings,
   const reviewed = page.reviewedAt ? Date.parse(page.reviewedAt) : Number.NaN;
   if (!Number.isNaN(reviewed)) {
     const days = Math.floor((now.getTime() - reviewed) / DAY_MS);
-    if (days > settings.staleDays) reasons.push({ rule: 'stale', detail: `Last reviewed ${page.reviewedAt} (${days} days ago; limit ${settings.staleDays}).` });
+    if (days > settings.staleDays)
+      reasons.push({ rule: 'stale', detail: `Last reviewed ${page.reviewedAt} (${days} days ago; limit ${settings.staleDays}).` });
   }
-  if (page.wordCount < settings.thinWordCount) reasons.push({ rule: 'thin', detail: `${page.wordCount} words (fewer than ${settings.thinWordCount}).` });
+  if (page.wordCount < settings.thinWordCount)
+    reasons.push({ rule: 'thin', detail: `${page.wordCount} words (fewer than ${settings.thinWordCount}).` });
   return reasons;
 }
 
 /** The candidates of one run: unprotected pages meeting at least MIN_SIGNALS rules. */
-export function proposeCandidates(pages: PruningPage[], settings: PruningRuleSettings, now: Date): { page: PruningPage; reasons: PruningReason[] }[] {
-  const lowScore = percentileThreshold(pages.map((p) => p.stationaryScore), settings.lowScorePercentile);
+export function proposeCandidates(
+  pages: PruningPage[],
+  settings: PruningRuleSettings,
+  now: Date,
+): { page: PruningPage; reasons: PruningReason[] }[] {
+  const lowScore = percentileThreshold(
+    pages.map((p) => p.stationaryScore),
+    settings.lowScorePercentile,
+  );
   const result: { page: PruningPage; reasons: PruningReason[] }[] = [];
   for (const page of pages) {
     if (isProtected(page, settings.protectGlobs)) continue;

@@ -4,7 +4,14 @@ import type { Response } from 'express';
 import { type AuthUser, CurrentUser, MinRole } from '../../common/auth.decorators.js';
 import { ApiZodBody, ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
 import { type ExportFile, PruningService } from './pruning.service.js';
-import { type DecisionsInput, decisionsSchema, type NominationInput, nominationSchema, type PruningListQuery, pruningListQuerySchema } from './pruning.schemas.js';
+import {
+  type DecisionsInput,
+  decisionsSchema,
+  type NominationInput,
+  nominationSchema,
+  type PruningListQuery,
+  pruningListQuerySchema,
+} from './pruning.schemas.js';
 
 function send(res: Response, file: ExportFile): string {
   res.setHeader('Content-Type', file.contentType);
@@ -28,7 +35,11 @@ export class PruningController {
   @Post('nominations')
   @MinRole('writer')
   @ApiZodBody(nominationSchema)
-  nominate(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Body(new ZodPipe(nominationSchema)) body: NominationInput) {
+  nominate(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Body(new ZodPipe(nominationSchema)) body: NominationInput,
+  ) {
     return this.pruning.nominate(actor, docSetId, body);
   }
 
@@ -36,7 +47,11 @@ export class PruningController {
   @HttpCode(200)
   @MinRole('editor')
   @ApiZodBody(decisionsSchema)
-  decide(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Body(new ZodPipe(decisionsSchema)) body: DecisionsInput) {
+  decide(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Body(new ZodPipe(decisionsSchema)) body: DecisionsInput,
+  ) {
     return this.pruning.decide(actor, docSetId, body);
   }
 

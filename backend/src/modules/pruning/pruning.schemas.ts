@@ -13,7 +13,11 @@ export const decisionsSchema = z
   .object({
     version: z.number().int().min(0),
     decisions: z
-      .array(z.object({ path: pagePath, decision: z.enum(['approve', 'reject', 'keep']), note: z.string().trim().max(2000).default('') }).strict())
+      .array(
+        z
+          .object({ path: pagePath, decision: z.enum(['approve', 'reject', 'keep']), note: z.string().trim().max(2000).default('') })
+          .strict(),
+      )
       .min(1)
       .max(500)
       .refine((items) => new Set(items.map((i) => i.path)).size === items.length, 'each path may appear once'),

@@ -27,7 +27,10 @@ describe('run comparison and ranked search', () => {
     expect(diff.runId).toBe(second.id);
     expect(diff.kinds.brokenLinks.appeared).toEqual({ total: 1, items: [{ sourcePath: 'tools/deep/hubs.md', href: 'bearings.md' }] });
     expect(diff.kinds.brokenLinks.disappeared).toEqual({ total: 1, items: [{ sourcePath: 'index.md', href: 'missing.md' }] });
-    expect(diff.kinds.orphans).toEqual({ appeared: { total: 0, items: [] }, disappeared: { total: 1, items: [{ path: 'spoke-log.md', title: 'Spoke tension log' }] } });
+    expect(diff.kinds.orphans).toEqual({
+      appeared: { total: 0, items: [] },
+      disappeared: { total: 1, items: [{ path: 'spoke-log.md', title: 'Spoke tension log' }] },
+    });
     expect(diff.kinds.unreachable.disappeared.items.map((i: { path: string }) => i.path)).toEqual(['spoke-log.md']);
     expect(diff.kinds.deadEnds).toEqual({ appeared: { total: 0, items: [] }, disappeared: { total: 0, items: [] } });
     const moves = diff.scoreMoves as { path: string; before: number; after: number; change: number }[];
@@ -41,9 +44,17 @@ describe('run comparison and ranked search', () => {
   it('ranks full-text matches by the documented blend of text rank and link score', async () => {
     const body = (await read(t, `/api/doc-sets/${docSetId}/runs/${first.id}/search?q=wheel&mode=blend`)).body;
     expect(body.explanation).toMatch(/textRank \/ best textRank\)\^1 x timesAverage\^0\.25/);
-    expect(body.items.map((i: { path: string }) => i.path).sort()).toEqual(['spoke-log.md', 'tools/advanced.md', 'tools/install.md', 'tools/setup.md']);
+    expect(body.items.map((i: { path: string }) => i.path).sort()).toEqual([
+      'spoke-log.md',
+      'tools/advanced.md',
+      'tools/install.md',
+      'tools/setup.md',
+    ]);
     const best = Math.max(...body.items.map((i: { textRank: number }) => i.textRank));
-    const pages = (await read(t, `/api/doc-sets/${docSetId}/runs/${first.id}/pages?pageSize=50`)).body.items as { path: string; timesAverage: number }[];
+    const pages = (await read(t, `/api/doc-sets/${docSetId}/runs/${first.id}/pages?pageSize=50`)).body.items as {
+      path: string;
+      timesAverage: number;
+    }[];
     for (const item of body.items) {
       const timesAverage = pages.find((p) => p.path === item.path)!.timesAverage;
       expect(item.score).toBeCloseTo((item.textRank / best) * timesAverage ** 0.25, 12);
@@ -57,8 +68,13 @@ describe('run comparison and ranked search', () => {
     const body = (await read(t, `/api/doc-sets/${docSetId}/runs/${first.id}/search?q=wheel&mode=subgraph`)).body;
     const matched = body.items.map((i: { path: string }) => i.path) as string[];
     // The pure engine on the links among the matched pages only (same damping 0.85, uniform teleport).
-    const inside = HANDBOOK_LINKS.filter((l) => l.to && ['ok', 'redirected'].includes(l.status ?? 'ok') && matched.includes(l.from) && matched.includes(l.to));
-    const { graph } = buildLinkGraph(matched, inside.map((l) => [l.from, l.to!] as const));
+    const inside = HANDBOOK_LINKS.filter(
+      (l) => l.to && ['ok', 'redirected'].includes(l.status ?? 'ok') && matched.includes(l.from) && matched.includes(l.to),
+    );
+    const { graph } = buildLinkGraph(
+      matched,
+      inside.map((l) => [l.from, l.to!] as const),
+    );
     const { scores } = computeStationaryScore(graph, { damping: 0.85 });
     body.items.forEach((item: { score: number }, i: number) => expect(item.score).toBeCloseTo(scores[i], 12));
     expect(matched[0]).toBe('tools/advanced.md');

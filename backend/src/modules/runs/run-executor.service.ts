@@ -55,16 +55,34 @@ export class RunExecutor {
     });
     const computed = performance.now();
     const warnings = [...choice.warnings, ...summaryWarnings(result, settings)];
-    const [linkCounts, brokenCounts] = await Promise.all([this.inputs.linkStatusCounts(run.snapshotId), this.inputs.brokenLinkCounts(run.snapshotId)]);
+    const [linkCounts, brokenCounts] = await Promise.all([
+      this.inputs.linkStatusCounts(run.snapshotId),
+      this.inputs.brokenLinkCounts(run.snapshotId),
+    ]);
     await this.metrics.insertAll(run.id, pages, result, brokenCounts);
     await this.metrics.analyze();
     const stored = performance.now();
     this.lastPhases = { load: loaded - started, compute: computed - loaded, store: stored - computed, suggestions: 0 };
     const teleportEntries = result.summary.teleportUsed === 'entry-pages' ? entries : [];
-    const context = { runId: run.id, snapshotId: run.snapshotId, pageIds: pages.ids, paths: pages.paths, scores: result.scores, edgePairs, damping: settings.damping, teleportEntries };
+    const context = {
+      runId: run.id,
+      snapshotId: run.snapshotId,
+      pageIds: pages.ids,
+      paths: pages.paths,
+      scores: result.scores,
+      edgePairs,
+      damping: settings.damping,
+      teleportEntries,
+    };
     const { iterations, residual } = result.summary;
     const counts = runCounts(pages.ids.length, linkCounts, result.summary.counts);
-    const finished = await this.runs.markFinished(run.id, { iterations, residual, durationMs: Math.round(performance.now() - started), counts, warnings });
+    const finished = await this.runs.markFinished(run.id, {
+      iterations,
+      residual,
+      durationMs: Math.round(performance.now() - started),
+      counts,
+      warnings,
+    });
     return { finished, suggestions: { context, targets: needyPages(pages, result).slice(0, PRECOMPUTED_SUGGESTION_TARGETS) } };
   }
 
@@ -84,10 +102,16 @@ export class RunExecutor {
 function summaryWarnings(result: AnalyzeJobResult, settings: DocSetSettings): RunWarning[] {
   const warnings: RunWarning[] = [];
   if (!result.summary.converged) {
-    warnings.push({ code: 'SCORE_NOT_CONVERGED', message: `The stationary score did not settle within ${result.summary.iterations} iterations (last change ${result.summary.residual}).` });
+    warnings.push({
+      code: 'SCORE_NOT_CONVERGED',
+      message: `The stationary score did not settle within ${result.summary.iterations} iterations (last change ${result.summary.residual}).`,
+    });
   }
   if (settings.teleport === 'entry-pages' && result.summary.teleportUsed === 'uniform') {
-    warnings.push({ code: 'TELEPORT_UNIFORM', message: 'Teleport was set to entry pages, but there is none; the uniform teleport was used.' });
+    warnings.push({
+      code: 'TELEPORT_UNIFORM',
+      message: 'Teleport was set to entry pages, but there is none; the uniform teleport was used.',
+    });
   }
   return warnings;
 }
@@ -104,5 +128,7 @@ export function needyPages(pages: SnapshotPages, result: AnalyzeJobResult): numb
     return f & FLAG_DEEP ? 1 : 0;
   };
   const needy = pages.ids.map((_, i) => i).filter((i) => urgency(i) > 0);
-  return needy.sort((a, b) => urgency(b) - urgency(a) || pages.wordCounts[b] - pages.wordCounts[a] || (pages.paths[a] < pages.paths[b] ? -1 : 1));
+  return needy.sort(
+    (a, b) => urgency(b) - urgency(a) || pages.wordCounts[b] - pages.wordCounts[a] || (pages.paths[a] < pages.paths[b] ? -1 : 1),
+  );
 }

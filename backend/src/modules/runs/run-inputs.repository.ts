@@ -32,7 +32,10 @@ export class RunInputsRepository {
   }
 
   async isReadySnapshot(docSetId: string, snapshotId: string): Promise<boolean> {
-    const rows = await queryRows<{ id: string }>(this.db, sql`select id from snapshots where id = ${snapshotId} and doc_set_id = ${docSetId} and status = 'ready'`);
+    const rows = await queryRows<{ id: string }>(
+      this.db,
+      sql`select id from snapshots where id = ${snapshotId} and doc_set_id = ${docSetId} and status = 'ready'`,
+    );
     return rows.length > 0;
   }
 
@@ -42,7 +45,12 @@ export class RunInputsRepository {
       this.db,
       sql`select id, path, title, word_count from pages where snapshot_id = ${snapshotId} order by id`,
     );
-    return { ids: rows.map((r) => Number(r.id)), paths: rows.map((r) => r.path), titles: rows.map((r) => r.title), wordCounts: rows.map((r) => r.word_count) };
+    return {
+      ids: rows.map((r) => Number(r.id)),
+      paths: rows.map((r) => r.path),
+      titles: rows.map((r) => r.title),
+      wordCounts: rows.map((r) => r.word_count),
+    };
   }
 
   /**

@@ -27,7 +27,13 @@ export const PAGE_SORT_COLUMNS = {
 export type PageSortKey = keyof typeof PAGE_SORT_COLUMNS;
 const SORT_VALUES = Object.keys(PAGE_SORT_COLUMNS).flatMap((k) => [k, `-${k}`]);
 
-export const PAGE_FLAGS = { orphan: 'orphan', 'dead-end': 'dead_end', unreachable: 'not reachable', deep: 'deep', island: 'island_id is not null' } as const;
+export const PAGE_FLAGS = {
+  orphan: 'orphan',
+  'dead-end': 'dead_end',
+  unreachable: 'not reachable',
+  deep: 'deep',
+  island: 'island_id is not null',
+} as const;
 export type PageFlag = keyof typeof PAGE_FLAGS;
 
 const finite = z.coerce.number().refine(Number.isFinite, 'must be a number');
@@ -36,14 +42,26 @@ const depth = z.coerce.number().int().min(0).max(1_000);
 export const pageListQuerySchema = z
   .object({
     ...paging,
-    sort: z.string().default('-stationaryScore').refine((v) => SORT_VALUES.includes(v), { message: `must be one of: ${SORT_VALUES.join(', ')}` }),
+    sort: z
+      .string()
+      .default('-stationaryScore')
+      .refine((v) => SORT_VALUES.includes(v), { message: `must be one of: ${SORT_VALUES.join(', ')}` }),
     q: z.string().max(200).optional(),
     flags: z
       .string()
       .max(200)
       .optional()
-      .transform((v) => (v ? v.split(',').map((f) => f.trim()).filter(Boolean) : []))
-      .refine((list) => list.every((f) => f in PAGE_FLAGS), { message: `flags must be a comma-separated list of: ${Object.keys(PAGE_FLAGS).join(', ')}` })
+      .transform((v) =>
+        v
+          ? v
+              .split(',')
+              .map((f) => f.trim())
+              .filter(Boolean)
+          : [],
+      )
+      .refine((list) => list.every((f) => f in PAGE_FLAGS), {
+        message: `flags must be a comma-separated list of: ${Object.keys(PAGE_FLAGS).join(', ')}`,
+      })
       .transform((list) => [...new Set(list)] as PageFlag[]),
     minScore: finite.optional(),
     maxScore: finite.optional(),
@@ -90,7 +108,10 @@ export const diffQuerySchema = z.object({ against: z.union([z.literal('latest'),
 
 export const EXPORT_VIEWS = ['pages', 'links', 'broken', 'orphans', 'dead-ends', 'unreachable', 'deep', 'islands'] as const;
 /** A view plus, for page views, the page list's filters (so "export" gives the rows on screen); `sort` is accepted but rows stream by rank. */
-export const exportQuerySchema = pageListQuerySchema.omit({ page: true, pageSize: true }).extend({ view: z.enum(EXPORT_VIEWS).default('pages') }).strict();
+export const exportQuerySchema = pageListQuerySchema
+  .omit({ page: true, pageSize: true })
+  .extend({ view: z.enum(EXPORT_VIEWS).default('pages') })
+  .strict();
 export type ExportQuery = z.infer<typeof exportQuerySchema>;
 
 export const startRunSchema = z.object({ settings: docSetSettingsPatchSchema.optional() }).strict();

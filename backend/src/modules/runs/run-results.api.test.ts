@@ -27,8 +27,22 @@ describe('run results', () => {
   it('counts every finding of the hand-drawn handbook', () => {
     // Counted by hand from findings-fixture.ts (entry page index.md, depth threshold 3).
     expect(run.counts).toEqual({
-      pages: 9, links: 14, internalLinks: 12, externalLinks: 1, brokenLinks: 2, brokenAnchors: 1, brokenAssets: 1, unsafeLinks: 1,
-      ambiguousLinks: 0, redirectedLinks: 1, outOfScopeLinks: 0, orphans: 1, deadEnds: 3, unreachable: 3, deepPages: 1, islands: 2,
+      pages: 9,
+      links: 14,
+      internalLinks: 12,
+      externalLinks: 1,
+      brokenLinks: 2,
+      brokenAnchors: 1,
+      brokenAssets: 1,
+      unsafeLinks: 1,
+      ambiguousLinks: 0,
+      redirectedLinks: 1,
+      outOfScopeLinks: 0,
+      orphans: 1,
+      deadEnds: 3,
+      unreachable: 3,
+      deepPages: 1,
+      islands: 2,
     });
   });
 
@@ -37,10 +51,17 @@ describe('run results', () => {
     expect(paths((await read(t, `${base}/pages?flags=orphan,deep&sort=path`)).body)).toEqual(['spoke-log.md', 'tools/deep/hubs.md']);
     expect((await read(t, `${base}/pages?flags=unreachable`)).body.total).toBe(3);
     expect((await read(t, `${base}/pages?flags=island`)).body.total).toBe(3);
-    expect(paths((await read(t, `${base}/pages?minDepth=2&maxDepth=3&sort=depth`)).body)).toEqual(['tools/install.md', 'tools/advanced.md']);
+    expect(paths((await read(t, `${base}/pages?minDepth=2&maxDepth=3&sort=depth`)).body)).toEqual([
+      'tools/install.md',
+      'tools/advanced.md',
+    ]);
     const byScore = (await read(t, `${base}/pages?sort=-stationaryScore&pageSize=50`)).body;
     expect(byScore.items.map((i: { rank: number }) => i.rank)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9]);
-    const reference = referenceScores(HANDBOOK_PAGES.map((p) => p.path), HANDBOOK_LINKS, 0.85);
+    const reference = referenceScores(
+      HANDBOOK_PAGES.map((p) => p.path),
+      HANDBOOK_LINKS,
+      0.85,
+    );
     for (const item of byScore.items) expect(item.stationaryScore).toBeCloseTo(reference.get(item.path)!, 9);
     const second = (await read(t, `${base}/pages?sort=rank&page=2&pageSize=3`)).body;
     expect(second).toMatchObject({ total: 9, page: 2, pageSize: 3 });
@@ -57,10 +78,24 @@ describe('run results', () => {
 
   // RELIABILITY checks 40 and 41 (OWASP ASVS 1.2.4: sort keys through an allowlist; LIKE wildcards escaped).
   it('treats %, _ and \\ in q literally and rejects injected or malformed parameters', async () => {
-    for (const q of ['%', '_', '\\']) expect(paths((await read(t, `${base}/pages?q=${encodeURIComponent(q)}`)).body), q).toEqual(['notes/100%_done.md']);
+    for (const q of ['%', '_', '\\'])
+      expect(paths((await read(t, `${base}/pages?q=${encodeURIComponent(q)}`)).body), q).toEqual(['notes/100%_done.md']);
     expect((await read(t, `${base}/pages?q=${encodeURIComponent("' OR 1=1--")}`)).body.total).toBe(0);
     const started = Date.now();
-    for (const query of ['sort=title;DROP TABLE pages--', 'sort=(select pg_sleep(5))', 'sort=unknown', 'order=sideways', 'pageSize=-1', 'pageSize=1e9', 'pageSize=abc', 'page=NaN', 'sort[]=a&sort[]=b', 'q[$ne]=1', 'q[a][b]=c', 'flags=orphan,nonsense']) {
+    for (const query of [
+      'sort=title;DROP TABLE pages--',
+      'sort=(select pg_sleep(5))',
+      'sort=unknown',
+      'order=sideways',
+      'pageSize=-1',
+      'pageSize=1e9',
+      'pageSize=abc',
+      'page=NaN',
+      'sort[]=a&sort[]=b',
+      'q[$ne]=1',
+      'q[a][b]=c',
+      'flags=orphan,nonsense',
+    ]) {
       const response = await read(t, `${base}/pages?${query}`);
       expect(response.status, query).toBe(400);
       expect(response.body.message, query).not.toMatch(/select|insert|page_metrics/i);
@@ -76,7 +111,13 @@ describe('run results', () => {
     const install = (await read(t, `${base}/page?path=tools/install.md`)).body;
     expect(install.inbound).toEqual([{ path: 'tools/setup.md', title: 'Setting up the bench', line: 5 }]);
     expect(install.outbound).toEqual([{ path: 'tools/advanced.md', title: 'Advanced wheel truing', line: 2 }]);
-    expect(install.neighbourhood.nodes.map((n: { path: string }) => n.path).sort()).toEqual(['index.md', 'tools/advanced.md', 'tools/deep/hubs.md', 'tools/install.md', 'tools/setup.md']);
+    expect(install.neighbourhood.nodes.map((n: { path: string }) => n.path).sort()).toEqual([
+      'index.md',
+      'tools/advanced.md',
+      'tools/deep/hubs.md',
+      'tools/install.md',
+      'tools/setup.md',
+    ]);
     expect(install.neighbourhood.edges).toHaveLength(4);
     expect(install.scoreHistory).toEqual([{ runId: run.id, finishedAt: run.finishedAt, stationaryScore: install.stationaryScore }]);
     const setup = (await read(t, `${base}/page?path=tools/setup.md`)).body;
@@ -100,7 +141,9 @@ describe('run results', () => {
 
   it('lists links with unsafe hrefs as text and groups broken links by missing target', async () => {
     const unsafe = (await read(t, `${base}/links?status=unsafe`)).body;
-    expect(unsafe.items).toEqual([expect.objectContaining({ sourcePath: 'tools/install.md', href: null, hrefText: 'javascript:alert(1)', status: 'unsafe' })]);
+    expect(unsafe.items).toEqual([
+      expect.objectContaining({ sourcePath: 'tools/install.md', href: null, hrefText: 'javascript:alert(1)', status: 'unsafe' }),
+    ]);
     const external = (await read(t, `${base}/links?status=external`)).body.items[0];
     expect(external.href).toBe('https://example.org/parts');
     const grouped = (await read(t, `${base}/links?status=broken&groupBy=target`)).body;
@@ -114,7 +157,10 @@ describe('run results', () => {
 
   it('lists islands and the score distribution', async () => {
     const islands = (await read(t, `${base}/islands`)).body;
-    expect(islands.items.map((i: { pages: { path: string }[] }) => i.pages.map((p) => p.path).sort())).toEqual([['spoke-log.md'], ['swap/left.md', 'swap/right.md']]);
+    expect(islands.items.map((i: { pages: { path: string }[] }) => i.pages.map((p) => p.path).sort())).toEqual([
+      ['spoke-log.md'],
+      ['swap/left.md', 'swap/right.md'],
+    ]);
     const distribution = (await read(t, `${base}/score-distribution`)).body;
     const shares = distribution.buckets.reduce((sum: number, b: { share: number }) => sum + b.share, 0);
     expect(shares).toBeCloseTo(1, 12);
@@ -128,7 +174,9 @@ describe('run results', () => {
     const response = await read(t, `${base}/export.csv?view=pages`);
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toMatch(/^text\/csv/);
-    expect(response.headers['content-disposition']).toMatch(/^attachment; filename="Bike_Hub_-run-[0-9a-f]{8}-pages\.csv"; filename\*=UTF-8''Bike%20%22Hub%22%20%CE%B2-run-/);
+    expect(response.headers['content-disposition']).toMatch(
+      /^attachment; filename="Bike_Hub_-run-[0-9a-f]{8}-pages\.csv"; filename\*=UTF-8''Bike%20%22Hub%22%20%CE%B2-run-/,
+    );
     const lines = response.text.trim().split('\r\n');
     expect(lines).toHaveLength(10);
     expect(lines.find((l) => l.startsWith('swap/left.md'))).toMatch(/^swap\/left\.md,'=SUM\(1\+1\) swap day,/);

@@ -29,30 +29,54 @@ export class RunResultsController {
 
   @Get('pages')
   @ApiZodQuery(pageListQuerySchema)
-  pages(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string, @Query(new ZodPipe(pageListQuerySchema)) query: PageListQuery) {
+  pages(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+    @Query(new ZodPipe(pageListQuerySchema)) query: PageListQuery,
+  ) {
     return this.results.pages({ actor, docSetId, runId }, query);
   }
 
   @Get('page')
   @ApiZodQuery(pageDetailQuerySchema)
-  page(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string, @Query(new ZodPipe(pageDetailQuerySchema)) query: { path: string }) {
+  page(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+    @Query(new ZodPipe(pageDetailQuerySchema)) query: { path: string },
+  ) {
     return this.results.page({ actor, docSetId, runId }, query.path);
   }
 
   @Get('links')
   @ApiZodQuery(linkListQuerySchema)
-  links(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string, @Query(new ZodPipe(linkListQuerySchema)) query: LinkListQuery) {
+  links(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+    @Query(new ZodPipe(linkListQuerySchema)) query: LinkListQuery,
+  ) {
     return this.results.links({ actor, docSetId, runId }, query);
   }
 
   @Get('islands')
   @ApiZodQuery(islandsQuerySchema)
-  islands(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string, @Query(new ZodPipe(islandsQuerySchema)) query: { page: number; pageSize: number }) {
+  islands(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+    @Query(new ZodPipe(islandsQuerySchema)) query: { page: number; pageSize: number },
+  ) {
     return this.results.islands({ actor, docSetId, runId }, query.page, query.pageSize);
   }
 
   @Get('score-distribution')
-  scoreDistribution(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string) {
+  scoreDistribution(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+  ) {
     return this.results.scoreDistribution({ actor, docSetId, runId });
   }
 
@@ -69,7 +93,12 @@ export class RunResultsController {
 
   @Get('diff')
   @ApiZodQuery(diffQuerySchema)
-  diff(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string, @Query(new ZodPipe(diffQuerySchema)) query: { against: string }) {
+  diff(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Param('runId', RunIdPipe) runId: string,
+    @Query(new ZodPipe(diffQuerySchema)) query: { against: string },
+  ) {
     return this.results.diff({ actor, docSetId, runId }, query.against);
   }
 
@@ -84,7 +113,9 @@ export class RunResultsController {
   ): Promise<void> {
     const { view, sort: _sort, ...filters } = query;
     const csv = await this.results.prepareExport({ actor, docSetId, runId }, view, filters);
-    response.status(200).set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': csv.contentDisposition, 'Cache-Control': 'no-store' });
+    response
+      .status(200)
+      .set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': csv.contentDisposition, 'Cache-Control': 'no-store' });
     await csv.write(async (chunk) => {
       if (!response.write(chunk)) await once(response, 'drain');
     });

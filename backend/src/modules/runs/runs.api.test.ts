@@ -13,7 +13,18 @@ import { createDocSet, read, snapshotOf, startRun, waitForRun } from './testing/
 // d = 0.9, page 2 a dead end. Scores as given in DOMAIN.md (recalled from memory there and reproduced by
 // independent computation). Page 1 is the doc set's root index page, so it is the entry page.
 const PAGES = ['index.md', 'two.md', 'three.md', 'four.md', 'five.md', 'six.md'];
-const EDGES = [[1, 2], [1, 3], [3, 1], [3, 2], [3, 5], [4, 5], [4, 6], [5, 4], [5, 6], [6, 4]];
+const EDGES = [
+  [1, 2],
+  [1, 3],
+  [3, 1],
+  [3, 2],
+  [3, 5],
+  [4, 5],
+  [4, 6],
+  [5, 4],
+  [5, 6],
+  [6, 4],
+];
 const PUBLISHED = [0.03721, 0.05396, 0.04151, 0.3751, 0.206, 0.2862];
 
 describe('runs', () => {
@@ -22,7 +33,12 @@ describe('runs', () => {
   beforeAll(async () => {
     t = await createTestApp();
     docSetId = await createDocSet(t, 'Deeper inside');
-    await snapshotOf(t, docSetId, PAGES.map((path) => ({ path })), EDGES.map(([s, d]) => ({ from: PAGES[s - 1], to: PAGES[d - 1] })));
+    await snapshotOf(
+      t,
+      docSetId,
+      PAGES.map((path) => ({ path })),
+      EDGES.map(([s, d]) => ({ from: PAGES[s - 1], to: PAGES[d - 1] })),
+    );
   });
   afterAll(async () => t?.close());
 
@@ -31,7 +47,17 @@ describe('runs', () => {
     const run = await waitForRun(t, docSetId, runId);
     expect(run).toMatchObject({ status: 'finished', trigger: 'manual', warnings: [] });
     expect(run.settings.damping).toBe(0.9);
-    expect(run.counts).toMatchObject({ pages: 6, links: 10, internalLinks: 10, brokenLinks: 0, orphans: 0, deadEnds: 1, unreachable: 0, deepPages: 0, islands: 0 });
+    expect(run.counts).toMatchObject({
+      pages: 6,
+      links: 10,
+      internalLinks: 10,
+      brokenLinks: 0,
+      orphans: 0,
+      deadEnds: 1,
+      unreachable: 0,
+      deepPages: 0,
+      islands: 0,
+    });
     expect(run.residual).toBeLessThan(1e-10);
     const list = await read(t, `/api/doc-sets/${docSetId}/runs/${runId}/pages?sort=path&pageSize=10`);
     const byPath = new Map(list.body.items.map((item: { path: string }) => [item.path, item]));
@@ -100,14 +126,23 @@ describe('runs', () => {
 
   it('lets only editors and admins start runs, and explains a doc set without a snapshot', async () => {
     for (const role of ['viewer', 'writer'] as const) {
-      const response = await t.http.post(`/api/doc-sets/${docSetId}/runs`).set('Authorization', `Bearer ${await t.tokenFor(role)}`).send({});
+      const response = await t.http
+        .post(`/api/doc-sets/${docSetId}/runs`)
+        .set('Authorization', `Bearer ${await t.tokenFor(role)}`)
+        .send({});
       expect(response.status, role).toBe(403);
     }
     const empty = await createDocSet(t, 'Empty');
-    const response = await t.http.post(`/api/doc-sets/${empty}/runs`).set('Authorization', `Bearer ${await t.tokenFor('editor')}`).send({});
+    const response = await t.http
+      .post(`/api/doc-sets/${empty}/runs`)
+      .set('Authorization', `Bearer ${await t.tokenFor('editor')}`)
+      .send({});
     expect(response.status).toBe(409);
     expect(response.body.code).toBe('NO_READY_SNAPSHOT');
-    const bad = await t.http.post(`/api/doc-sets/${docSetId}/runs`).set('Authorization', `Bearer ${await t.tokenFor('editor')}`).send({ settings: { damping: 1.5 } });
+    const bad = await t.http
+      .post(`/api/doc-sets/${docSetId}/runs`)
+      .set('Authorization', `Bearer ${await t.tokenFor('editor')}`)
+      .send({ settings: { damping: 1.5 } });
     expect(bad.status).toBe(400);
     expect((await read(t, `/api/doc-sets/${docSetId}/runs/not-a-run`)).status).toBe(400);
   });

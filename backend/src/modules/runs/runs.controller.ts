@@ -16,13 +16,21 @@ export class RunsController {
   @HttpCode(202)
   @MinRole('editor')
   @ApiZodBody(startRunSchema)
-  async start(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Body(new ZodPipe(startRunSchema)) body: StartRunInput) {
+  async start(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Body(new ZodPipe(startRunSchema)) body: StartRunInput,
+  ) {
     return { run: await this.runs.startManual(actor, docSetId, body.settings) };
   }
 
   @Get()
   @ApiZodQuery(runListQuerySchema)
-  list(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Query(new ZodPipe(runListQuerySchema)) query: { page: number; pageSize: number }) {
+  list(
+    @CurrentUser() actor: AuthUser,
+    @Param('docSetId', ParseUUIDPipe) docSetId: string,
+    @Query(new ZodPipe(runListQuerySchema)) query: { page: number; pageSize: number },
+  ) {
     return this.runs.list(actor, docSetId, query.page, query.pageSize);
   }
 

@@ -17,8 +17,17 @@ export class RunsRepository {
     return this.database.db;
   }
 
-  async insertQueued(values: { docSetId: string; snapshotId: string; trigger: RunTrigger; settings: DocSetSettings; createdBy: string | null }): Promise<RunRow> {
-    const [row] = await this.db.insert(runs).values({ ...values, status: 'queued' }).returning();
+  async insertQueued(values: {
+    docSetId: string;
+    snapshotId: string;
+    trigger: RunTrigger;
+    settings: DocSetSettings;
+    createdBy: string | null;
+  }): Promise<RunRow> {
+    const [row] = await this.db
+      .insert(runs)
+      .values({ ...values, status: 'queued' })
+      .returning();
     return row;
   }
 
@@ -37,8 +46,15 @@ export class RunsRepository {
     return claimed[0] ? this.findById(claimed[0].id) : null;
   }
 
-  async markFinished(id: string, result: { iterations: number; residual: number; durationMs: number; counts: RunCounts; warnings: RunWarning[] }): Promise<RunRow> {
-    const [row] = await this.db.update(runs).set({ ...result, status: 'finished', finishedAt: new Date() }).where(eq(runs.id, id)).returning();
+  async markFinished(
+    id: string,
+    result: { iterations: number; residual: number; durationMs: number; counts: RunCounts; warnings: RunWarning[] },
+  ): Promise<RunRow> {
+    const [row] = await this.db
+      .update(runs)
+      .set({ ...result, status: 'finished', finishedAt: new Date() })
+      .where(eq(runs.id, id))
+      .returning();
     return row;
   }
 
@@ -57,7 +73,10 @@ export class RunsRepository {
   }
 
   async hasQueued(docSetId: string): Promise<boolean> {
-    const rows = await queryRows<{ id: string }>(this.db, sql`select id from runs where doc_set_id = ${docSetId} and status = 'queued' limit 1`);
+    const rows = await queryRows<{ id: string }>(
+      this.db,
+      sql`select id from runs where doc_set_id = ${docSetId} and status = 'queued' limit 1`,
+    );
     return rows.length > 0;
   }
 
@@ -67,7 +86,11 @@ export class RunsRepository {
   }
 
   async findInDocSet(docSetId: string, runId: string): Promise<RunRow | null> {
-    const [row] = await this.db.select().from(runs).where(and(eq(runs.id, runId), eq(runs.docSetId, docSetId))).limit(1);
+    const [row] = await this.db
+      .select()
+      .from(runs)
+      .where(and(eq(runs.id, runId), eq(runs.docSetId, docSetId)))
+      .limit(1);
     return row ?? null;
   }
 
@@ -82,7 +105,13 @@ export class RunsRepository {
   }
 
   async list(docSetId: string, offset: number, limit: number): Promise<{ rows: RunRow[]; total: number }> {
-    const rows = await this.db.select().from(runs).where(eq(runs.docSetId, docSetId)).orderBy(desc(runs.createdAt), desc(runs.id)).offset(offset).limit(limit);
+    const rows = await this.db
+      .select()
+      .from(runs)
+      .where(eq(runs.docSetId, docSetId))
+      .orderBy(desc(runs.createdAt), desc(runs.id))
+      .offset(offset)
+      .limit(limit);
     const [{ value }] = await this.db.select({ value: count() }).from(runs).where(eq(runs.docSetId, docSetId));
     return { rows, total: value };
   }

@@ -47,7 +47,13 @@ export class RunsService implements OnModuleInit, OnApplicationBootstrap {
   }
 
   /** Queues a run over the doc set's latest ready snapshot (or the given one) with merged settings. */
-  async startRun(docSetId: string, trigger: RunTrigger, overrides?: DocSetSettingsPatch, actor?: Pick<AuthUser, 'id'>, snapshotId?: string): Promise<RunView> {
+  async startRun(
+    docSetId: string,
+    trigger: RunTrigger,
+    overrides?: DocSetSettingsPatch,
+    actor?: Pick<AuthUser, 'id'>,
+    snapshotId?: string,
+  ): Promise<RunView> {
     const docSet = await this.docSets.get(docSetId);
     const settings = overrides ? this.docSets.merge(docSet.settings, overrides) : docSet.settings;
     const snapshot = snapshotId ?? (await this.inputs.latestReadySnapshotId(docSetId));
@@ -113,7 +119,10 @@ export class RunsService implements OnModuleInit, OnApplicationBootstrap {
       await this.events.emit('run.finished', { docSetId: run.docSetId, runId: run.id, trigger: run.trigger });
     } catch (error) {
       this.logger.error(`Run ${run.id} failed: ${(error as Error)?.stack ?? String(error)}`);
-      const message = error instanceof AppError || error instanceof RangeError ? `The analysis failed: ${error.message}` : 'The analysis failed with an internal error (details in the server log).';
+      const message =
+        error instanceof AppError || error instanceof RangeError
+          ? `The analysis failed: ${error.message}`
+          : 'The analysis failed with an internal error (details in the server log).';
       await this.executor.discardResults(run.id).catch(() => undefined);
       await this.runs.markFailed(run.id, message);
       await this.events.emit('run.failed', { docSetId: run.docSetId, runId: run.id, message });

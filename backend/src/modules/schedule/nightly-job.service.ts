@@ -20,7 +20,14 @@ export type NightlyTrigger = 'clock' | 'run-now' | 'catch-up';
 export interface NightlyOutcome {
   status: 'finished' | 'skipped';
   reason?: string;
-  docSets: { docSetId: string; name: string; action: 're-read folder' | 're-analysed'; outcome: 'finished' | 'failed'; runId?: string; message?: string }[];
+  docSets: {
+    docSetId: string;
+    name: string;
+    action: 're-read folder' | 're-analysed';
+    outcome: 'finished' | 'failed';
+    runId?: string;
+    message?: string;
+  }[];
 }
 
 /**
@@ -50,9 +57,13 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
   onModuleInit(): void {
     // Last, so the finished run's other effects (task verification, pruning list) are in place before the digest.
     const last = { last: true };
-    this.events.on('run.finished', ({ docSetId, runId, trigger }) => {
-      if (trigger === 'nightly') this.settle(docSetId, { ok: true, runId });
-    }, last);
+    this.events.on(
+      'run.finished',
+      ({ docSetId, runId, trigger }) => {
+        if (trigger === 'nightly') this.settle(docSetId, { ok: true, runId });
+      },
+      last,
+    );
     this.events.on('run.failed', ({ docSetId, runId, message }) => this.settle(docSetId, { ok: false, runId, message }), last);
     this.events.on('snapshot.failed', ({ docSetId, message }) => this.settle(docSetId, { ok: false, message }), last);
   }
@@ -114,7 +125,9 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
     }
     const result = await done;
     if (result.ok && result.runId) {
-      await this.digest.sendForRun(docSetId, result.runId).catch((error) => this.logger.error(`The digest of run ${result.runId} failed: ${String(error)}`));
+      await this.digest
+        .sendForRun(docSetId, result.runId)
+        .catch((error) => this.logger.error(`The digest of run ${result.runId} failed: ${String(error)}`));
     }
     return { docSetId, name, action, outcome: result.ok ? 'finished' : 'failed', runId: result.runId, message: result.message };
   }
@@ -149,7 +162,12 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
       lastStartedAt: ran || lease?.leaseUntil ? (lease?.lastStartedAt?.toISOString() ?? null) : null,
       lastFinishedAt: ran ? (lease?.lastFinishedAt?.toISOString() ?? null) : null,
       lastResult: ran ? lease!.lastResult : null,
-      docSets: (await this.docSets.list()).map((d) => ({ id: d.id, name: d.name, nightly: d.settings.nightly, sourceFolder: d.settings.sourceFolder })),
+      docSets: (await this.docSets.list()).map((d) => ({
+        id: d.id,
+        name: d.name,
+        nightly: d.settings.nightly,
+        sourceFolder: d.settings.sourceFolder,
+      })),
     };
   }
 }

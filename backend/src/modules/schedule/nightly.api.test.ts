@@ -54,7 +54,12 @@ describe('the nightly job and its digest', () => {
     const runs = await read(t, `/api/doc-sets/${docSetId}/runs`);
     const nightlyRun = runs.body.items.find((r: { trigger: string }) => r.trigger === 'nightly');
     const diff = await read(t, `/api/doc-sets/${docSetId}/runs/${nightlyRun.id}/diff?against=${firstRunId}`);
-    for (const [kind, label] of [['brokenLinks', 'Broken links'], ['orphans', 'Orphan pages'], ['deadEnds', 'Dead ends'], ['unreachable', 'Unreachable pages']]) {
+    for (const [kind, label] of [
+      ['brokenLinks', 'Broken links'],
+      ['orphans', 'Orphan pages'],
+      ['deadEnds', 'Dead ends'],
+      ['unreachable', 'Unreachable pages'],
+    ]) {
       const expected = { appeared: diff.body.kinds[kind].appeared.total, disappeared: diff.body.kinds[kind].disappeared.total };
       const found = stated(message.body.text, label);
       if (expected.appeared + expected.disappeared === 0) expect(found, label).toBeNull();

@@ -53,9 +53,19 @@ export class RunFindingsRepository {
     if (paths && paths.length === 0) return new Map();
     const rows = await db
       .select({
-        pageId: pageMetrics.pageId, path: pageMetrics.path, title: pageMetrics.title, orphan: pageMetrics.orphan, deadEnd: pageMetrics.deadEnd,
-        reachable: pageMetrics.reachable, deep: pageMetrics.deep, inboundCount: pageMetrics.inboundCount, stationaryScore: pageMetrics.stationaryScore,
-        wordCount: pageMetrics.wordCount, ownerEmail: pages.ownerEmail, reviewedAt: pages.reviewedAt, protected: pages.protected,
+        pageId: pageMetrics.pageId,
+        path: pageMetrics.path,
+        title: pageMetrics.title,
+        orphan: pageMetrics.orphan,
+        deadEnd: pageMetrics.deadEnd,
+        reachable: pageMetrics.reachable,
+        deep: pageMetrics.deep,
+        inboundCount: pageMetrics.inboundCount,
+        stationaryScore: pageMetrics.stationaryScore,
+        wordCount: pageMetrics.wordCount,
+        ownerEmail: pages.ownerEmail,
+        reviewedAt: pages.reviewedAt,
+        protected: pages.protected,
       })
       .from(pageMetrics)
       .leftJoin(pages, and(eq(pages.id, pageMetrics.pageId), eq(pages.snapshotId, run.snapshotId)))
@@ -63,20 +73,42 @@ export class RunFindingsRepository {
     const broken = await db
       .select({ pageId: links.sourcePageId, href: links.href, line: links.line, status: links.status })
       .from(links)
-      .where(and(eq(links.snapshotId, run.snapshotId), inArray(links.status, BROKEN), paths ? inArray(links.sourcePageId, rows.map((r) => r.pageId)) : undefined))
+      .where(
+        and(
+          eq(links.snapshotId, run.snapshotId),
+          inArray(links.status, BROKEN),
+          paths
+            ? inArray(
+                links.sourcePageId,
+                rows.map((r) => r.pageId),
+              )
+            : undefined,
+        ),
+      )
       .orderBy(links.sourcePageId, links.line);
     const brokenByPage = new Map<number, PageFinding['brokenLinks']>();
-    for (const b of broken) brokenByPage.set(b.pageId, [...(brokenByPage.get(b.pageId) ?? []), { href: b.href, line: b.line, status: b.status }]);
+    for (const b of broken)
+      brokenByPage.set(b.pageId, [...(brokenByPage.get(b.pageId) ?? []), { href: b.href, line: b.line, status: b.status }]);
     return new Map(
       rows.map(({ pageId, ...r }) => [
         r.path,
-        { ...r, ownerEmail: r.ownerEmail ?? null, reviewedAt: r.reviewedAt ?? null, protected: r.protected ?? false, brokenLinks: brokenByPage.get(pageId) ?? [] },
+        {
+          ...r,
+          ownerEmail: r.ownerEmail ?? null,
+          reviewedAt: r.reviewedAt ?? null,
+          protected: r.protected ?? false,
+          brokenLinks: brokenByPage.get(pageId) ?? [],
+        },
       ]),
     );
   }
 
   /** Suggested source pages (with score gain) for pages that need inbound links. */
-  async suggestedSources(run: RunRef, paths: string[], perPage = 5): Promise<Map<string, { path: string; title: string; scoreGain: number }[]>> {
+  async suggestedSources(
+    run: RunRef,
+    paths: string[],
+    perPage = 5,
+  ): Promise<Map<string, { path: string; title: string; scoreGain: number }[]>> {
     if (paths.length === 0) return new Map();
     const rows = await this.database.db.execute(sql`
       select t.path as target, s.path as path, s.title as title, ls.score_gain as "scoreGain"

@@ -26,7 +26,9 @@ export function assertCanUpdate(actor: TaskActor, task: { assigneeId: string | n
 export function assertCanComment(actor: TaskActor, task: { assigneeId: string | null }): void {
   if (roleAtLeast(actor.role, 'editor')) return;
   if (actor.role === 'writer' && task.assigneeId === actor.id) return;
-  throw forbidden(actor.role === 'writer' ? 'Writers can only comment on tasks assigned to them.' : 'Viewers can read tasks but not comment.');
+  throw forbidden(
+    actor.role === 'writer' ? 'Writers can only comment on tasks assigned to them.' : 'Viewers can read tasks but not comment.',
+  );
 }
 
 /** Only writers, editors and admins do documentation work, so only they can be assignees. */

@@ -29,5 +29,12 @@ export function toTaskItem(row: TaskWithNames, now = new Date()): TaskItem {
 }
 
 export function toTaskEventItem(row: TaskEventRow): TaskEventItem {
-  return { id: row.id, type: row.type, actor: { id: row.actorId, name: row.actorName }, body: row.body, changes: row.changes, at: row.at.toISOString() };
+  return {
+    id: row.id,
+    type: row.type,
+    actor: { id: row.actorId, name: row.actorName },
+    body: row.body,
+    changes: row.changes,
+    at: row.at.toISOString(),
+  };
 }

@@ -22,7 +22,9 @@ export function defaultTitle(kind: TaskKind, pagePath: string, page?: PageFindin
 
 export function prefillFinding(kind: TaskKind, page: PageFinding | undefined, sources: Source[] = []): TaskFinding {
   if (!page) return {};
-  const flags = [page.orphan && 'orphan', page.deadEnd && 'dead-end', !page.reachable && 'unreachable', page.deep && 'deep'].filter(Boolean) as string[];
+  const flags = [page.orphan && 'orphan', page.deadEnd && 'dead-end', !page.reachable && 'unreachable', page.deep && 'deep'].filter(
+    Boolean,
+  ) as string[];
   if (kind === 'repair-broken-links') return { flags, brokenLinks: page.brokenLinks.slice(0, 200) };
   if (kind === 'add-inbound-links' || kind === 'make-reachable') return { flags, suggestedSources: sources };
   return { flags };

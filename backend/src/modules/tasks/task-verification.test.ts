@@ -3,8 +3,20 @@ import type { PageFinding } from './run-findings.repository.js';
 import { findingPresent, verificationStep } from './task-verification.js';
 
 const page = (over: Partial<PageFinding> = {}): PageFinding => ({
-  path: 'guide/a.md', title: 'A', orphan: false, deadEnd: false, reachable: true, deep: false, inboundCount: 2, stationaryScore: 0.1,
-  wordCount: 300, ownerEmail: null, reviewedAt: null, protected: false, brokenLinks: [], ...over,
+  path: 'guide/a.md',
+  title: 'A',
+  orphan: false,
+  deadEnd: false,
+  reachable: true,
+  deep: false,
+  inboundCount: 2,
+  stationaryScore: 0.1,
+  wordCount: 300,
+  ownerEmail: null,
+  reviewedAt: null,
+  protected: false,
+  brokenLinks: [],
+  ...over,
 });
 
 describe('findingPresent', () => {
@@ -27,7 +39,10 @@ describe('findingPresent', () => {
 
 describe('verificationStep', () => {
   it('verifies (and closes) work whose finding is gone', () => {
-    expect(verificationStep({ status: 'in-progress', verification: null }, false)).toMatchObject({ status: 'done', verification: 'verified' });
+    expect(verificationStep({ status: 'in-progress', verification: null }, false)).toMatchObject({
+      status: 'done',
+      verification: 'verified',
+    });
     expect(verificationStep({ status: 'done', verification: null }, false)).toMatchObject({ status: 'done', verification: 'verified' });
   });
 

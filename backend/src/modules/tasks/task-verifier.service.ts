@@ -40,9 +40,17 @@ export class TaskVerifierService implements OnModuleInit {
         const { status, verification, note } = step!;
         await this.repository.update(task.id, { status, verification, verifiedRunId: runId, verifiedAt: new Date() }, tx);
         const changes = Object.fromEntries(
-          [['status', task.status, status], ['verification', task.verification, verification]].filter(([, from, to]) => from !== to).map(([k, from, to]) => [k, { from, to }]),
+          [
+            ['status', task.status, status],
+            ['verification', task.verification, verification],
+          ]
+            .filter(([, from, to]) => from !== to)
+            .map(([k, from, to]) => [k, { from, to }]),
         );
-        await this.repository.addEvents([{ taskId: task.id, type: 'change', actorId: null, actorName: RUN_ACTOR, body: note, changes }], tx);
+        await this.repository.addEvents(
+          [{ taskId: task.id, type: 'change', actorId: null, actorName: RUN_ACTOR, body: note, changes }],
+          tx,
+        );
         await this.audit.record(null, `task.${verification ?? 'reopened'}`, 'task', task.id, { runId, note }, { docSetId, executor: tx });
       }
     });

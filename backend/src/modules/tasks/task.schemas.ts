@@ -5,7 +5,10 @@ import { z } from 'zod';
 import { TASK_KINDS, TASK_STATUSES } from '../../db/schema/work.js';
 
 const pagePath = z.string().trim().min(1).max(1024);
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'use YYYY-MM-DD').refine((d) => !Number.isNaN(Date.parse(d)), 'not a real date');
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'use YYYY-MM-DD')
+  .refine((d) => !Number.isNaN(Date.parse(d)), 'not a real date');
 export const taskKindSchema = z.enum(TASK_KINDS);
 export const taskStatusSchema = z.enum(TASK_STATUSES);
 export const prioritySchema = z.enum(['low', 'normal', 'high']);
@@ -51,17 +54,32 @@ export const updateTaskSchema = z
 export const commentSchema = z.object({ body: z.string().trim().min(1).max(10_000) }).strict();
 
 const flag = z.enum(['true', 'false']).transform((v) => v === 'true');
-export const TASK_SORTS = ['dueDate', '-dueDate', 'createdAt', '-createdAt', 'priority', '-priority', 'pagePath', '-pagePath', 'status', '-status'] as const;
+export const TASK_SORTS = [
+  'dueDate',
+  '-dueDate',
+  'createdAt',
+  '-createdAt',
+  'priority',
+  '-priority',
+  'pagePath',
+  '-pagePath',
+  'status',
+  '-status',
+] as const;
 
 export const listTasksQuerySchema = listQuerySchema
   .extend({
     assignee: z.union([z.literal('me'), z.string().uuid()]).optional(),
-    status: z.string().max(100).optional().transform((v, ctx) => {
-      const items = v ? v.split(',').filter(Boolean) : [];
-      const bad = items.filter((s) => !(TASK_STATUSES as readonly string[]).includes(s));
-      if (bad.length) ctx.addIssue({ code: 'custom', message: `unknown status ${bad.join(', ')}; use ${TASK_STATUSES.join(', ')}` });
-      return items as (typeof TASK_STATUSES)[number][];
-    }),
+    status: z
+      .string()
+      .max(100)
+      .optional()
+      .transform((v, ctx) => {
+        const items = v ? v.split(',').filter(Boolean) : [];
+        const bad = items.filter((s) => !(TASK_STATUSES as readonly string[]).includes(s));
+        if (bad.length) ctx.addIssue({ code: 'custom', message: `unknown status ${bad.join(', ')}; use ${TASK_STATUSES.join(', ')}` });
+        return items as (typeof TASK_STATUSES)[number][];
+      }),
     kind: taskKindSchema.optional(),
     docSetId: z.string().uuid().optional(),
     overdue: flag.optional(),

@@ -12,7 +12,14 @@ const WRITER = 'writer@demo.linkloom.test';
 const basePages = (): FixturePage[] => [
   { path: 'index.md', title: 'Harbour ops' },
   { path: 'berths/allocation.md', title: 'Berth allocation', orphan: true, ownerEmail: WRITER },
-  { path: 'cranes/maintenance.md', title: 'Crane maintenance', brokenLinks: [{ href: '../safety/lockout.md', line: 12 }, { href: 'manual.md#torque', line: 40, status: 'broken-anchor' }] },
+  {
+    path: 'cranes/maintenance.md',
+    title: 'Crane maintenance',
+    brokenLinks: [
+      { href: '../safety/lockout.md', line: 12 },
+      { href: 'manual.md#torque', line: 40, status: 'broken-anchor' },
+    ],
+  },
   { path: 'tides/tables.md', title: 'Tide tables', deadEnd: true, ownerEmail: 'nobody@elsewhere.test' },
 ];
 
@@ -23,7 +30,12 @@ describe('fix tasks', () => {
   const ids: Record<string, string> = {};
   const as = async (role: 'admin' | 'editor' | 'writer' | 'viewer') => `Bearer ${await t.tokenFor(role)}`;
   const mailsTo = async (email: string) =>
-    (await db.select({ n: count() }).from(outbox).where(and(eq(outbox.toAddress, email), eq(outbox.kind, 'task-assigned'))))[0].n;
+    (
+      await db
+        .select({ n: count() })
+        .from(outbox)
+        .where(and(eq(outbox.toAddress, email), eq(outbox.kind, 'task-assigned')))
+    )[0].n;
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -39,22 +51,63 @@ describe('fix tasks', () => {
   it('lets editors and admins create, and refuses writers and viewers (403)', async () => {
     const body = { docSetId, pagePath: 'index.md', kind: 'other', title: 'Check the intro' };
     for (const role of ['writer', 'viewer'] as const) {
-      expect((await t.http.post('/api/tasks').set('Authorization', await as(role)).send(body)).status, role).toBe(403);
-      expect((await t.http.post('/api/tasks/bulk').set('Authorization', await as(role)).send({ docSetId, kind: 'other', pagePaths: ['index.md'] })).status, role).toBe(403);
+      expect(
+        (
+          await t.http
+            .post('/api/tasks')
+            .set('Authorization', await as(role))
+            .send(body)
+        ).status,
+        role,
+      ).toBe(403);
+      expect(
+        (
+          await t.http
+            .post('/api/tasks/bulk')
+            .set('Authorization', await as(role))
+            .send({ docSetId, kind: 'other', pagePaths: ['index.md'] })
+        ).status,
+        role,
+      ).toBe(403);
     }
-    expect((await t.http.post('/api/tasks').set('Authorization', await as('admin')).send(body)).status).toBe(201);
-    expect((await t.http.post('/api/tasks').set('Authorization', await as('editor')).send({ ...body, status: 'done' })).status).toBe(400);
+    expect(
+      (
+        await t.http
+          .post('/api/tasks')
+          .set('Authorization', await as('admin'))
+          .send(body)
+      ).status,
+    ).toBe(201);
+    expect(
+      (
+        await t.http
+          .post('/api/tasks')
+          .set('Authorization', await as('editor'))
+          .send({ ...body, status: 'done' })
+      ).status,
+    ).toBe(400);
   });
 
   it('assigns the front-matter owner by default and enqueues exactly one e-mail for the assignment', async () => {
     const before = await mailsTo(WRITER);
-    const response = await t.http.post('/api/tasks').set('Authorization', await as('editor'))
-      .send({ docSetId, pagePath: 'berths/allocation.md', kind: 'add-inbound-links', title: 'Link the berth allocation page', dueDate: '2020-01-31' });
+    const response = await t.http
+      .post('/api/tasks')
+      .set('Authorization', await as('editor'))
+      .send({
+        docSetId,
+        pagePath: 'berths/allocation.md',
+        kind: 'add-inbound-links',
+        title: 'Link the berth allocation page',
+        dueDate: '2020-01-31',
+      });
     expect(response.status).toBe(201);
     expect(response.body).toMatchObject({ assignee: { id: ids.writer }, status: 'open', overdue: true, finding: { flags: ['orphan'] } });
     expect(await mailsTo(WRITER)).toBe(before + 1);
     // An owner who is not a user leaves the task unassigned, and no mail goes out.
-    const unowned = await t.http.post('/api/tasks').set('Authorization', await as('editor')).send({ docSetId, pagePath: 'tides/tables.md', kind: 'add-outbound-links', title: 'Link onwards' });
+    const unowned = await t.http
+      .post('/api/tasks')
+      .set('Authorization', await as('editor'))
+      .send({ docSetId, pagePath: 'tides/tables.md', kind: 'add-outbound-links', title: 'Link onwards' });
     expect(unowned.body.assignee).toBeNull();
     expect((await db.select({ n: count() }).from(outbox).where(eq(outbox.toAddress, 'nobody@elsewhere.test')))[0].n).toBe(0);
   });
@@ -64,7 +117,9 @@ describe('fix tasks', () => {
     const spy = vi.spyOn(audit, 'record').mockRejectedValueOnce(new Error('disk hiccup'));
     const tasksBefore = (await db.select({ n: count() }).from(tasks))[0].n;
     const mailsBefore = await mailsTo(WRITER);
-    const response = await t.http.post('/api/tasks').set('Authorization', await as('editor'))
+    const response = await t.http
+      .post('/api/tasks')
+      .set('Authorization', await as('editor'))
       .send({ docSetId, pagePath: 'index.md', kind: 'other', title: 'Rolled back', assigneeId: ids.writer });
     spy.mockRestore();
     expect(response.status).toBe(500);
@@ -73,8 +128,16 @@ describe('fix tasks', () => {
   });
 
   it('creates one task per page in bulk, prefilled with the broken hrefs and their lines', async () => {
-    const response = await t.http.post('/api/tasks/bulk').set('Authorization', await as('editor'))
-      .send({ docSetId, kind: 'repair-broken-links', pagePaths: ['cranes/maintenance.md', 'index.md'], assigneeId: ids.writer, priority: 'high' });
+    const response = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', await as('editor'))
+      .send({
+        docSetId,
+        kind: 'repair-broken-links',
+        pagePaths: ['cranes/maintenance.md', 'index.md'],
+        assigneeId: ids.writer,
+        priority: 'high',
+      });
     expect(response.status).toBe(201);
     expect(response.body.items).toHaveLength(2);
     const cranes = response.body.items.find((i: { pagePath: string }) => i.pagePath === 'cranes/maintenance.md');
@@ -82,12 +145,18 @@ describe('fix tasks', () => {
     expect(cranes.details).toContain('line 12: ../safety/lockout.md (broken)');
     expect(cranes.details).toContain('line 40: manual.md#torque (broken-anchor)');
     expect(cranes.finding.brokenLinks).toHaveLength(2);
-    const viewer = await t.http.post('/api/tasks/bulk').set('Authorization', await as('editor')).send({ docSetId, kind: 'other', pagePaths: ['index.md'], assigneeId: ids.viewer });
+    const viewer = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', await as('editor'))
+      .send({ docSetId, kind: 'other', pagePaths: ['index.md'], assigneeId: ids.viewer });
     expect(viewer.status).toBe(422);
   });
 
   it('shows writers only their tasks and lets them change only the status (RELIABILITY check 60)', async () => {
-    const other = await t.http.post('/api/tasks').set('Authorization', await as('editor')).send({ docSetId, pagePath: 'index.md', kind: 'other', title: 'Editor’s own', assigneeId: ids.editor });
+    const other = await t.http
+      .post('/api/tasks')
+      .set('Authorization', await as('editor'))
+      .send({ docSetId, pagePath: 'index.md', kind: 'other', title: 'Editor’s own', assigneeId: ids.editor });
     const writer = await as('writer');
     const list = await t.http.get('/api/tasks?assignee=' + ids.editor).set('Authorization', writer);
     expect(list.status).toBe(200);
@@ -124,7 +193,10 @@ describe('fix tasks', () => {
     const find = async (pagePath: string, kind: string) =>
       (await t.http.get(`/api/tasks?docSetId=${docSetId}&pagePath=${pagePath}&kind=${kind}`).set('Authorization', editor)).body.items[0];
     const cranes = await find('cranes/maintenance.md', 'repair-broken-links');
-    await t.http.patch(`/api/tasks/${cranes.id}`).set('Authorization', await as('writer')).send({ status: 'done' });
+    await t.http
+      .patch(`/api/tasks/${cranes.id}`)
+      .set('Authorization', await as('writer'))
+      .send({ status: 'done' });
     const events = t.app.get(DomainEvents);
     // Run 2: the berth page gained links, the crane links are still broken.
     const second = basePages().map((p) => (p.path === 'berths/allocation.md' ? { ...p, orphan: false } : p));
@@ -138,7 +210,9 @@ describe('fix tasks', () => {
     await events.emit('run.finished', { docSetId, runId: run3.runId, trigger: 'manual' });
     const berth = await find('berths/allocation.md', 'add-inbound-links');
     expect(berth).toMatchObject({ status: 'open', verification: null });
-    const history = (await t.http.get(`/api/tasks/${berth.id}`).set('Authorization', editor)).body.events.map((e: { body: string }) => e.body);
+    const history = (await t.http.get(`/api/tasks/${berth.id}`).set('Authorization', editor)).body.events.map(
+      (e: { body: string }) => e.body,
+    );
     expect(history.some((b: string) => b.includes('verified'))).toBe(true);
     expect(history.at(-1)).toContain('reopened');
   });

@@ -3,8 +3,15 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, MinRole } from '../../common/auth.decorators.js';
 import { ApiZodBody, ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
 import {
-  type BulkCreateTasksInput, bulkCreateTasksSchema, commentSchema, type CreateTaskInput, createTaskSchema, type ListTasksQuery,
-  listTasksQuerySchema, type UpdateTaskInput, updateTaskSchema,
+  type BulkCreateTasksInput,
+  bulkCreateTasksSchema,
+  commentSchema,
+  type CreateTaskInput,
+  createTaskSchema,
+  type ListTasksQuery,
+  listTasksQuerySchema,
+  type UpdateTaskInput,
+  updateTaskSchema,
 } from './task.schemas.js';
 import { TasksService } from './tasks.service.js';
 
@@ -48,14 +55,22 @@ export class TasksController {
   @Patch(':taskId')
   @MinRole('writer')
   @ApiZodBody(updateTaskSchema)
-  update(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string, @Body(new ZodPipe(updateTaskSchema)) body: UpdateTaskInput) {
+  update(
+    @CurrentUser() actor: AuthUser,
+    @Param('taskId', ParseUUIDPipe) id: string,
+    @Body(new ZodPipe(updateTaskSchema)) body: UpdateTaskInput,
+  ) {
     return this.tasks.update(actor, id, body);
   }
 
   @Post(':taskId/comments')
   @MinRole('writer')
   @ApiZodBody(commentSchema)
-  comment(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string, @Body(new ZodPipe(commentSchema)) body: { body: string }) {
+  comment(
+    @CurrentUser() actor: AuthUser,
+    @Param('taskId', ParseUUIDPipe) id: string,
+    @Body(new ZodPipe(commentSchema)) body: { body: string },
+  ) {
     return this.tasks.comment(actor, id, body.body);
   }
 }

@@ -19,7 +19,13 @@ export interface TaskFilter {
   pagePath?: string;
 }
 
-const SORT_COLUMNS = { dueDate: tasks.dueDate, createdAt: tasks.createdAt, priority: tasks.priority, pagePath: tasks.pagePath, status: tasks.status };
+const SORT_COLUMNS = {
+  dueDate: tasks.dueDate,
+  createdAt: tasks.createdAt,
+  priority: tasks.priority,
+  pagePath: tasks.pagePath,
+  status: tasks.status,
+};
 const assignee = alias(users, 'assignee');
 
 @Injectable()
@@ -31,7 +37,11 @@ export class TasksRepository {
   }
 
   async update(id: string, values: Partial<NewTask>, executor: Executor): Promise<TaskRow | null> {
-    const [row] = await executor.update(tasks).set({ ...values, updatedAt: new Date() }).where(eq(tasks.id, id)).returning();
+    const [row] = await executor
+      .update(tasks)
+      .set({ ...values, updatedAt: new Date() })
+      .where(eq(tasks.id, id))
+      .returning();
     return row ?? null;
   }
 
@@ -45,10 +55,20 @@ export class TasksRepository {
   }
 
   async events(taskId: string): Promise<TaskEventRow[]> {
-    return this.database.db.select().from(taskEvents).where(eq(taskEvents.taskId, taskId)).orderBy(asc(taskEvents.at), asc(taskEvents.id)).limit(2000);
+    return this.database.db
+      .select()
+      .from(taskEvents)
+      .where(eq(taskEvents.taskId, taskId))
+      .orderBy(asc(taskEvents.at), asc(taskEvents.id))
+      .limit(2000);
   }
 
-  async list(filter: TaskFilter, sort: string | undefined, offset: number, limit: number): Promise<{ rows: TaskWithNames[]; total: number }> {
+  async list(
+    filter: TaskFilter,
+    sort: string | undefined,
+    offset: number,
+    limit: number,
+  ): Promise<{ rows: TaskWithNames[]; total: number }> {
     const where = this.where(filter);
     const key = (sort ?? '-createdAt').replace(/^-/, '') as keyof typeof SORT_COLUMNS;
     const order = sort?.startsWith('-') || !sort ? desc(SORT_COLUMNS[key]) : asc(SORT_COLUMNS[key]);
@@ -59,7 +79,10 @@ export class TasksRepository {
 
   /** Tasks a run can verify: every one not closed as won't fix, in one doc set. */
   async verifiable(docSetId: string, kinds: TaskRow['kind'][]): Promise<TaskRow[]> {
-    return this.database.db.select().from(tasks).where(and(eq(tasks.docSetId, docSetId), ne(tasks.status, 'wont-fix'), inArray(tasks.kind, kinds)));
+    return this.database.db
+      .select()
+      .from(tasks)
+      .where(and(eq(tasks.docSetId, docSetId), ne(tasks.status, 'wont-fix'), inArray(tasks.kind, kinds)));
   }
 
   private selectWithNames(executor: Executor) {
@@ -84,4 +107,3 @@ export class TasksRepository {
     return present.length ? and(...present) : sql`true`;
   }
 }
-

@@ -36,7 +36,15 @@ export class TasksService {
   /** Writers see only their own tasks (RELIABILITY check 60); everyone else may filter freely. */
   async list(actor: AuthUser, query: ListTasksQuery): Promise<ListResult<TaskItem>> {
     const assigneeId = actor.role === 'writer' || query.assignee === 'me' ? actor.id : query.assignee;
-    const filter = { assigneeId, statuses: query.status, kind: query.kind, docSetId: query.docSetId, verification: query.verification, pagePath: query.pagePath, overdueOn: query.overdue ? today() : undefined };
+    const filter = {
+      assigneeId,
+      statuses: query.status,
+      kind: query.kind,
+      docSetId: query.docSetId,
+      verification: query.verification,
+      pagePath: query.pagePath,
+      overdueOn: query.overdue ? today() : undefined,
+    };
     const { rows, total } = await this.repository.list(filter, query.sort, (query.page - 1) * query.pageSize, query.pageSize);
     return { items: rows.map((r) => toTaskItem(r)), total, page: query.page, pageSize: query.pageSize };
   }
@@ -65,7 +73,10 @@ export class TasksService {
     const explicit = input.assigneeId ? await this.assignee(input.assigneeId) : null;
     const run = await this.findings.latestFinishedRun(docSet.id);
     const pages = run ? await this.findings.pageFindings(run, paths) : new Map();
-    const sources = run && (input.kind === 'add-inbound-links' || input.kind === 'make-reachable') ? await this.findings.suggestedSources(run, paths) : new Map();
+    const sources =
+      run && (input.kind === 'add-inbound-links' || input.kind === 'make-reachable')
+        ? await this.findings.suggestedSources(run, paths)
+        : new Map();
     const owners = explicit ? new Map<string, UserRow>() : await this.ownersByEmail(paths.map((p) => pages.get(p)?.ownerEmail));
     const rows: NewTask[] = paths.map((path) => {
       const page = pages.get(path);
@@ -73,16 +84,43 @@ export class TasksService {
       const owner = page?.ownerEmail ? owners.get(page.ownerEmail.toLowerCase()) : undefined;
       const details = [input.details, prefillDetails(input.kind, finding)].filter(Boolean).join('\n\n');
       return {
-        id: randomUUID(), docSetId: docSet.id, pagePath: path, kind: input.kind, title: paths.length === 1 && title ? title : defaultTitle(input.kind, path, page),
-        details, finding, assigneeId: explicit?.id ?? owner?.id ?? null, priority: input.priority ?? 'normal', dueDate: input.dueDate ?? null, createdBy: actor.id,
+        id: randomUUID(),
+        docSetId: docSet.id,
+        pagePath: path,
+        kind: input.kind,
+        title: paths.length === 1 && title ? title : defaultTitle(input.kind, path, page),
+        details,
+        finding,
+        assigneeId: explicit?.id ?? owner?.id ?? null,
+        priority: input.priority ?? 'normal',
+        dueDate: input.dueDate ?? null,
+        createdBy: actor.id,
       };
     });
     const messages = await this.assignmentMessages(rows as (NewTask & { id: string })[], docSet);
     const created = await this.database.db.transaction(async (tx) => {
       const inserted = await this.repository.insert(rows, tx);
       await this.mail.enqueue(messages, tx);
-      await this.repository.addEvents(inserted.map((t) => ({ taskId: t.id, type: 'change' as const, actorId: actor.id, actorName: nameOf(actor), body: 'Created the task.', changes: { status: { from: null, to: 'open' }, assigneeId: { from: null, to: t.assigneeId } } })), tx);
-      for (const t of inserted) await this.audit.record(actor, 'task.created', 'task', t.id, { pagePath: t.pagePath, kind: t.kind, assigneeId: t.assigneeId }, { docSetId: docSet.id, executor: tx });
+      await this.repository.addEvents(
+        inserted.map((t) => ({
+          taskId: t.id,
+          type: 'change' as const,
+          actorId: actor.id,
+          actorName: nameOf(actor),
+          body: 'Created the task.',
+          changes: { status: { from: null, to: 'open' }, assigneeId: { from: null, to: t.assigneeId } },
+        })),
+        tx,
+      );
+      for (const t of inserted)
+        await this.audit.record(
+          actor,
+          'task.created',
+          'task',
+          t.id,
+          { pagePath: t.pagePath, kind: t.kind, assigneeId: t.assigneeId },
+          { docSetId: docSet.id, executor: tx },
+        );
       return inserted;
     });
     return Promise.all(created.map(async (t) => toTaskItem((await this.repository.findById(t.id))!)));
@@ -94,13 +132,17 @@ export class TasksService {
     assertCanUpdate(actor, current, Object.keys(patch));
     if (patch.assigneeId) await this.assignee(patch.assigneeId);
     const changes = Object.fromEntries(
-      Object.entries(patch).filter(([k, v]) => (current as Record<string, unknown>)[k] !== v).map(([k, v]) => [k, { from: (current as Record<string, unknown>)[k], to: v }]),
+      Object.entries(patch)
+        .filter(([k, v]) => (current as Record<string, unknown>)[k] !== v)
+        .map(([k, v]) => [k, { from: (current as Record<string, unknown>)[k], to: v }]),
     );
     if (Object.keys(changes).length === 0) return toTaskItem(current);
     // A writer reopening or re-closing work clears the run's earlier verdict, which no longer describes it.
     const verification = 'status' in changes ? { verification: null, verifiedAt: null, verifiedRunId: null } : {};
     const reassigned = 'assigneeId' in changes && patch.assigneeId ? { ...current, ...patch } : null;
-    const messages = reassigned ? await this.assignmentMessages([reassigned], { id: current.docSetId, name: current.docSetName ?? '' }) : [];
+    const messages = reassigned
+      ? await this.assignmentMessages([reassigned], { id: current.docSetId, name: current.docSetName ?? '' })
+      : [];
     await this.database.db.transaction(async (tx) => {
       await this.repository.update(id, { ...patch, ...verification }, tx);
       await this.repository.addEvents([{ taskId: id, type: 'change', actorId: actor.id, actorName: nameOf(actor), changes }], tx);
@@ -131,7 +173,8 @@ export class TasksService {
   private async assignee(id: string): Promise<UserRow> {
     const user = await this.users.findById(id);
     if (!user || user.disabled) throw new AppError(422, 'ASSIGNEE_NOT_FOUND', 'The assignee does not exist or cannot sign in.');
-    if (!canBeAssignee(user.role)) throw new AppError(422, 'ASSIGNEE_ROLE', `${user.name} is a viewer; tasks go to writers, editors or admins.`);
+    if (!canBeAssignee(user.role))
+      throw new AppError(422, 'ASSIGNEE_ROLE', `${user.name} is a viewer; tasks go to writers, editors or admins.`);
     return user;
   }
 
@@ -149,9 +192,13 @@ export class TasksService {
    * One message per assignee, built before the transaction (only `tx` may be used inside it) and enqueued in
    * it, so the mail exists exactly when the assignment does.
    */
-  private async assignmentMessages(tasks: { id: string; title: string; pagePath: string; dueDate?: string | null; assigneeId?: string | null }[], docSet: { id: string; name: string }) {
+  private async assignmentMessages(
+    tasks: { id: string; title: string; pagePath: string; dueDate?: string | null; assigneeId?: string | null }[],
+    docSet: { id: string; name: string },
+  ) {
     const byAssignee = new Map<string, AssignedTask[]>();
-    for (const t of tasks) if (t.assigneeId) byAssignee.set(t.assigneeId, [...(byAssignee.get(t.assigneeId) ?? []), { ...t, dueDate: t.dueDate ?? null }]);
+    for (const t of tasks)
+      if (t.assigneeId) byAssignee.set(t.assigneeId, [...(byAssignee.get(t.assigneeId) ?? []), { ...t, dueDate: t.dueDate ?? null }]);
     if (byAssignee.size === 0) return [];
     const people = await this.users.findByIds([...byAssignee.keys()]);
     return people.map((p) => assignmentMail({ email: p.email, name: p.name }, byAssignee.get(p.id)!, docSet, this.config.publicUrl));

@@ -39,7 +39,9 @@ describe('user administration', () => {
     const disabled = await t.http.patch(`/api/users/${created.body.id}`).set('Authorization', `Bearer ${admin}`).send({ disabled: true });
     expect(disabled.status).toBe(200);
     expect(disabled.body.disabled).toBe(true);
-    expect((await t.http.post('/api/auth/sign-in').send({ email: 'new.writer@example.com', password: 'a fine long password' })).status).toBe(401);
+    expect(
+      (await t.http.post('/api/auth/sign-in').send({ email: 'new.writer@example.com', password: 'a fine long password' })).status,
+    ).toBe(401);
     expect((await t.http.get('/api/me').set('Authorization', `Bearer ${signIn.body.accessToken}`)).status).toBe(401);
 
     const audit = await t.http.get(`/api/audit?entityType=user&entityId=${created.body.id}`).set('Authorization', `Bearer ${admin}`);
@@ -48,7 +50,10 @@ describe('user administration', () => {
   });
 
   it('rejects duplicate e-mails, unknown fields (mass assignment) and self-demotion', async () => {
-    const dup = await t.http.post('/api/users').set('Authorization', `Bearer ${admin}`).send({ email: 'viewer@demo.linkloom.test', name: 'x', role: 'viewer', password: 'another long password' });
+    const dup = await t.http
+      .post('/api/users')
+      .set('Authorization', `Bearer ${admin}`)
+      .send({ email: 'viewer@demo.linkloom.test', name: 'x', role: 'viewer', password: 'another long password' });
     expect(dup.status).toBe(409);
     const me = await t.http.get('/api/me').set('Authorization', `Bearer ${admin}`);
     const extra = await t.http.patch(`/api/users/${me.body.id}`).set('Authorization', `Bearer ${admin}`).send({ tokenVersion: 5 });
@@ -58,8 +63,12 @@ describe('user administration', () => {
   });
 
   it('a role change takes effect at once: the demoted user is refused with the old token', async () => {
-    const created = await t.http.post('/api/users').set('Authorization', `Bearer ${admin}`).send({ email: 'temp.admin@example.com', name: 'Temp', role: 'admin', password: 'temporary long password' });
-    const token = (await t.http.post('/api/auth/sign-in').send({ email: 'temp.admin@example.com', password: 'temporary long password' })).body.accessToken;
+    const created = await t.http
+      .post('/api/users')
+      .set('Authorization', `Bearer ${admin}`)
+      .send({ email: 'temp.admin@example.com', name: 'Temp', role: 'admin', password: 'temporary long password' });
+    const token = (await t.http.post('/api/auth/sign-in').send({ email: 'temp.admin@example.com', password: 'temporary long password' }))
+      .body.accessToken;
     expect((await t.http.get('/api/users').set('Authorization', `Bearer ${token}`)).status).toBe(200);
     await t.http.patch(`/api/users/${created.body.id}`).set('Authorization', `Bearer ${admin}`).send({ role: 'viewer' });
     expect((await t.http.get('/api/users').set('Authorization', `Bearer ${token}`)).status).toBe(401);

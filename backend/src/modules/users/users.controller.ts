@@ -26,7 +26,11 @@ export class UsersController {
 
   @Patch(':id')
   @ApiZodBody(updateUserSchema)
-  update(@CurrentUser() actor: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body(new ZodPipe(updateUserSchema)) body: UpdateUserInput) {
+  update(
+    @CurrentUser() actor: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body(new ZodPipe(updateUserSchema)) body: UpdateUserInput,
+  ) {
     return this.users.update(actor, id, body);
   }
 }

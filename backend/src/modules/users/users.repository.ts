@@ -42,7 +42,10 @@ export class UsersRepository {
 
   async findByIds(ids: string[]): Promise<UserRow[]> {
     if (ids.length === 0) return [];
-    return this.db.select().from(users).where(sql`${users.id} in ${ids}`);
+    return this.db
+      .select()
+      .from(users)
+      .where(sql`${users.id} in ${ids}`);
   }
 
   async count(): Promise<number> {
@@ -59,17 +62,30 @@ export class UsersRepository {
   }
 
   async insert(values: Pick<UserRow, 'email' | 'name' | 'role' | 'passwordHash'>): Promise<UserRow> {
-    const [row] = await this.db.insert(users).values({ ...values, email: values.email.toLowerCase() }).returning();
+    const [row] = await this.db
+      .insert(users)
+      .values({ ...values, email: values.email.toLowerCase() })
+      .returning();
     return row;
   }
 
-  async update(id: string, values: Partial<Pick<UserRow, 'role' | 'disabled' | 'name' | 'passwordHash' | 'lastSignInAt'>>): Promise<UserRow | null> {
-    const [row] = await this.db.update(users).set({ ...values, updatedAt: new Date() }).where(eq(users.id, id)).returning();
+  async update(
+    id: string,
+    values: Partial<Pick<UserRow, 'role' | 'disabled' | 'name' | 'passwordHash' | 'lastSignInAt'>>,
+  ): Promise<UserRow | null> {
+    const [row] = await this.db
+      .update(users)
+      .set({ ...values, updatedAt: new Date() })
+      .where(eq(users.id, id))
+      .returning();
     return row ?? null;
   }
 
   /** Revokes every access token of the user (sign-out, password change, disabling). */
   async bumpTokenVersion(id: string): Promise<void> {
-    await this.db.update(users).set({ tokenVersion: sql`${users.tokenVersion} + 1` }).where(eq(users.id, id));
+    await this.db
+      .update(users)
+      .set({ tokenVersion: sql`${users.tokenVersion} + 1` })
+      .where(eq(users.id, id));
   }
 }

@@ -22,7 +22,12 @@ export class UsersService {
     if (await this.users.findByEmail(input.email)) {
       throw conflict('EMAIL_TAKEN', `A user with the e-mail ${input.email} already exists.`);
     }
-    const row = await this.users.insert({ email: input.email, name: input.name, role: input.role, passwordHash: await hashPassword(input.password) });
+    const row = await this.users.insert({
+      email: input.email,
+      name: input.name,
+      role: input.role,
+      passwordHash: await hashPassword(input.password),
+    });
     await this.audit.record(actor, 'user.created', 'user', row.id, { email: row.email, role: row.role });
     return toUserDetails(row);
   }
@@ -30,7 +35,7 @@ export class UsersService {
   async update(actor: AuthUser, id: string, input: UpdateUserInput): Promise<UserDetails> {
     const current = await this.users.findById(id);
     if (!current) throw notFound('The user');
-    if (id === actor.id && (input.role !== undefined && input.role !== current.role || input.disabled === true)) {
+    if (id === actor.id && ((input.role !== undefined && input.role !== current.role) || input.disabled === true)) {
       throw new AppError(403, 'FORBIDDEN', 'You cannot change your own role or disable yourself; ask another admin.');
     }
     const losesAdmin = current.role === 'admin' && !current.disabled && ((input.role && input.role !== 'admin') || input.disabled === true);

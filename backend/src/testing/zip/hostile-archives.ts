@@ -52,7 +52,13 @@ export function badDeflate(): HostileArchive {
 
 export function badCrc(): HostileArchive {
   const wrong = deflatedEntry('docs/guide.md', '# Guide\n', { crc32: 0xdeadbeef });
-  return { check: 7, label: 'wrong CRC-32 in the central directory', bytes: writeRawZip([index, wrong]), code: 'ARCHIVE_CORRUPT', failsOnRead: true };
+  return {
+    check: 7,
+    label: 'wrong CRC-32 in the central directory',
+    bytes: writeRawZip([index, wrong]),
+    code: 'ARCHIVE_CORRUPT',
+    failsOnRead: true,
+  };
 }
 
 export const ZIP_SLIP_NAMES = ['../x.md', '../../outside/escape.md', '/abs.md', 'C:/x.md', 'a\\..\\..\\x.md', 'a/./../../x.md'];
@@ -63,7 +69,8 @@ export function zipSlip(): HostileArchive {
 }
 
 export function symlinks(): HostileArchive {
-  const link = (name: string, target: string): RawEntry => storedEntry(name, target, { externalAttributes: UNIX_SYMLINK, versionMadeBy: 0x031e });
+  const link = (name: string, target: string): RawEntry =>
+    storedEntry(name, target, { externalAttributes: UNIX_SYMLINK, versionMadeBy: 0x031e });
   const entries = [index, link('docs/secret.md', '/outside/secret'), link('docs/up.md', '../../..')];
   return { check: 9, label: 'symlink entries', bytes: writeRawZip(entries), code: 'ARCHIVE_SYMLINK' };
 }
@@ -89,7 +96,9 @@ export function unsupportedMethods(): HostileArchive[] {
 }
 
 export async function zip64Small(): Promise<HostileArchive[]> {
-  const raw = writeRawZip([{ ...index, zip64: true }, deflatedEntry('docs/guide.md', '# Guide\n', { zip64: true })], { zip64EndRecord: true });
+  const raw = writeRawZip([{ ...index, zip64: true }, deflatedEntry('docs/guide.md', '# Guide\n', { zip64: true })], {
+    zip64EndRecord: true,
+  });
   const yazlMade = await wellFormedZip({ 'docs/index.md': '# Welcome\n', 'docs/guide.md': '# Guide\n' }, { zip64: true });
   return [
     { check: 19, label: 'small ZIP64 archive (raw writer)', bytes: raw, code: null },

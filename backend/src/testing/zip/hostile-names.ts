@@ -46,7 +46,12 @@ export function deepAndLong(): HostileArchive[] {
   const deep = `${'d/'.repeat(199)}page.md`;
   const longPath = `${Array.from({ length: 20 }, () => 'x'.repeat(200)).join('/')}/page.md`;
   const longSegment = `docs/${'s'.repeat(300)}.md`;
-  const one = (label: string, name: string, code: string): HostileArchive => ({ check: 22, label, bytes: writeRawZip([index, deflatedEntry(name, '# x\n')]), code });
+  const one = (label: string, name: string, code: string): HostileArchive => ({
+    check: 22,
+    label,
+    bytes: writeRawZip([index, deflatedEntry(name, '# x\n')]),
+    code,
+  });
   return [
     one('depth 200', deep, 'ARCHIVE_PATH_TOO_DEEP'),
     one('4 KiB path', longPath, 'ARCHIVE_PATH_TOO_LONG'),

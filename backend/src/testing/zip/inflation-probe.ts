@@ -44,7 +44,9 @@ export function probeInflation(): InflationProbe {
 }
 
 /** Wall time and resident-set growth of one call, for the report (measured, not asserted). */
-export async function measure<T>(run: () => Promise<T>): Promise<{ result: T | undefined; error: unknown; ms: number; rssDeltaMb: number }> {
+export async function measure<T>(
+  run: () => Promise<T>,
+): Promise<{ result: T | undefined; error: unknown; ms: number; rssDeltaMb: number }> {
   const rssBefore = process.memoryUsage().rss;
   const start = process.hrtime.bigint();
   let result: T | undefined;

@@ -22,7 +22,10 @@ describe('raw ZIP writer', () => {
   it('writes archives yauzl reads with default options, stored and deflated', async () => {
     const bytes = writeRawZip([storedEntry('a.md', '# A\n'), deflatedEntry('b/c.md', '# C\n'.repeat(30))]);
     const entries = await readAll(bytes);
-    expect(entries.map((e) => [e.name, e.size, e.text])).toEqual([['a.md', 4, '# A\n'], ['b/c.md', 120, '# C\n'.repeat(30)]]);
+    expect(entries.map((e) => [e.name, e.size, e.text])).toEqual([
+      ['a.md', 4, '# A\n'],
+      ['b/c.md', 120, '# C\n'.repeat(30)],
+    ]);
   });
 
   it('writes ZIP64 records yauzl resolves (APPNOTE 4.3.14-4.3.15, 4.5.3)', async () => {

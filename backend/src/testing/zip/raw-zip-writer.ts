@@ -37,7 +37,7 @@ export interface RawZipOptions {
 
 const MAX32 = 0xffffffff;
 const DOS_TIME = 0; // 00:00:00
-const DOS_DATE = (2024 - 1980) << 9 | 1 << 5 | 1; // 2024-01-01
+const DOS_DATE = ((2024 - 1980) << 9) | (1 << 5) | 1; // 2024-01-01
 
 export function storedEntry(name: string | Buffer, content: string | Buffer, extra: Partial<RawEntry> = {}): RawEntry {
   const data = Buffer.from(content);

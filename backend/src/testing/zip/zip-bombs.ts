@@ -58,14 +58,25 @@ export async function ratioBomb(): Promise<HostileArchive> {
 /** Passes inspection (declares 1 KiB); only the reader's byte counter can stop it. */
 export async function lyingSizes(): Promise<HostileArchive> {
   const liar = await zeroEntry('docs/liar.md', 100 * MIB, { uncompressedSize: 1024 });
-  return { check: 12, label: 'lying sizes: declares 1 KiB, inflates to 100 MiB', bytes: writeRawZip([page, liar]), code: 'ARCHIVE_CORRUPT', failsOnRead: true };
+  return {
+    check: 12,
+    label: 'lying sizes: declares 1 KiB, inflates to 100 MiB',
+    bytes: writeRawZip([page, liar]),
+    code: 'ARCHIVE_CORRUPT',
+    failsOnRead: true,
+  };
 }
 
 /** 500 central records all pointing at one local entry (the overlap of Fifield's construction, unquoted). */
 export async function overlapBomb(): Promise<HostileArchive> {
   const shared = await zeroEntry('docs/shared.md', 10 * MIB);
   const copies = Array.from({ length: 499 }, (_, i) => ({ ...shared, name: `docs/copy-${i}.md`, writeLocal: false, localHeaderOffset: 0 }));
-  return { check: 13, label: 'overlap bomb: 500 records on one local entry', bytes: writeRawZip([shared, ...copies, page]), code: 'ARCHIVE_OVERLAPPING_ENTRIES' };
+  return {
+    check: 13,
+    label: 'overlap bomb: 500 records on one local entry',
+    bytes: writeRawZip([shared, ...copies, page]),
+    code: 'ARCHIVE_OVERLAPPING_ENTRIES',
+  };
 }
 
 /**
@@ -108,5 +119,10 @@ export async function hugeMarkdown(): Promise<HostileArchive> {
 /** A ZIP64 entry declaring 2^40 bytes (1 TiB) over 100 KiB of real data. */
 export async function zip64Huge(): Promise<HostileArchive> {
   const big = await zeroEntry('docs/tera.md', 100 * 1024, { uncompressedSize: 2 ** 40, zip64: true });
-  return { check: 19, label: 'ZIP64 entry declaring 2^40 bytes', bytes: writeRawZip([page, big], { zip64EndRecord: true }), code: 'ARCHIVE_ENTRY_TOO_LARGE' };
+  return {
+    check: 19,
+    label: 'ZIP64 entry declaring 2^40 bytes',
+    bytes: writeRawZip([page, big], { zip64EndRecord: true }),
+    code: 'ARCHIVE_ENTRY_TOO_LARGE',
+  };
 }

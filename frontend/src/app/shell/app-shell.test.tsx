@@ -19,7 +19,9 @@ describe('app shell', () => {
     vi.stubGlobal('fetch', api(true).fn);
     renderWithProviders(<AppShell />, { route: '/doc-sets/d1/runs', path: '/doc-sets/:docSetId/*' });
     const nav = await screen.findByRole('navigation', { name: 'Operator handbook' });
-    const labels = within(nav).getAllByRole('link').map((a) => a.textContent);
+    const labels = within(nav)
+      .getAllByRole('link')
+      .map((a) => a.textContent);
     expect(labels).toEqual(['Overview', 'Pages', 'Findings', 'Link map', 'Search', 'Runs', 'Settings']);
     expect(within(nav).getByRole('link', { name: 'Runs' }).getAttribute('aria-current')).toBe('page');
     expect(await screen.findByText(/Demo data/)).toBeTruthy();

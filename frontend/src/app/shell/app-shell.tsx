@@ -26,13 +26,22 @@ export function AppShell() {
   const role = session?.user.role ?? 'viewer';
   return (
     <Box sx={{ display: 'flex', minHeight: '100vh' }}>
-      <Box component="a" href="#main" sx={{ position: 'absolute', left: -9999, '&:focus': { left: 8, top: 8, zIndex: 2000, bgcolor: 'background.paper', p: 1 } }}>
+      <Box
+        component="a"
+        href="#main"
+        sx={{ position: 'absolute', left: -9999, '&:focus': { left: 8, top: 8, zIndex: 2000, bgcolor: 'background.paper', p: 1 } }}
+      >
         Skip to content
       </Box>
-      <Drawer variant="permanent" sx={{ width: DRAWER_WIDTH, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, bgcolor: 'background.default' } }}>
+      <Drawer
+        variant="permanent"
+        sx={{ width: DRAWER_WIDTH, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, bgcolor: 'background.default' } }}
+      >
         <Toolbar component={RouterLink} to="/" sx={{ gap: 1.5, textDecoration: 'none', color: 'primary.main' }}>
           <LogoMark size={30} />
-          <Typography variant="h3" component="span" sx={{ fontWeight: 600 }}>Linkloom</Typography>
+          <Typography variant="h3" component="span" sx={{ fontWeight: 600 }}>
+            Linkloom
+          </Typography>
         </Toolbar>
         <Divider />
         <NavList items={globalNav} role={role} />
@@ -49,7 +58,12 @@ export function AppShell() {
           )}
           <UserMenu />
         </Toolbar>
-        <Box component="main" id="main" tabIndex={-1} sx={{ p: { xs: 2, md: 3 }, maxWidth: 1600, width: '100%', mx: 'auto', outline: 'none' }}>
+        <Box
+          component="main"
+          id="main"
+          tabIndex={-1}
+          sx={{ p: { xs: 2, md: 3 }, maxWidth: 1600, width: '100%', mx: 'auto', outline: 'none' }}
+        >
           <Suspense fallback={<LinearProgress aria-label="Loading screen" />}>
             <Outlet />
           </Suspense>

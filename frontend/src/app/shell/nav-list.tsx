@@ -21,16 +21,35 @@ export function NavList({ title, items, role, docSetId = '' }: NavListProps) {
   const visible = items.filter((item) => roleAtLeast(role, item.minRole));
   if (visible.length === 0) return null;
   return (
-    <List dense component="nav" aria-label={title ?? 'Main'}
-      subheader={title ? <ListSubheader component="div" sx={{ bgcolor: 'transparent', lineHeight: '32px' }}>{title}</ListSubheader> : undefined}>
+    <List
+      dense
+      component="nav"
+      aria-label={title ?? 'Main'}
+      subheader={
+        title ? (
+          <ListSubheader component="div" sx={{ bgcolor: 'transparent', lineHeight: '32px' }}>
+            {title}
+          </ListSubheader>
+        ) : undefined
+      }
+    >
       {visible.map((item) => {
         const to = item.to(docSetId);
         const here = isHere(pathname, to, item.end);
         const Icon = item.icon;
         return (
-          <ListItemButton key={item.id} component={NavLink} to={to} end={item.end} selected={here}
-            aria-current={here ? 'page' : undefined} sx={{ borderRadius: 2, mx: 1 }}>
-            <ListItemIcon sx={{ minWidth: 36 }}><Icon /></ListItemIcon>
+          <ListItemButton
+            key={item.id}
+            component={NavLink}
+            to={to}
+            end={item.end}
+            selected={here}
+            aria-current={here ? 'page' : undefined}
+            sx={{ borderRadius: 2, mx: 1 }}
+          >
+            <ListItemIcon sx={{ minWidth: 36 }}>
+              <Icon />
+            </ListItemIcon>
             <ListItemText primary={item.label} />
           </ListItemButton>
         );

@@ -16,21 +16,46 @@ export function UserMenu() {
   const close = () => setAnchor(null);
   return (
     <>
-      <Button color="inherit" onClick={(e) => setAnchor(e.currentTarget)} aria-haspopup="menu"
-        aria-label={`Account menu for ${user.name}`} startIcon={<Avatar sx={{ width: 28, height: 28, fontSize: 14, bgcolor: 'secondary.main' }}>{user.name.slice(0, 1).toUpperCase()}</Avatar>}>
+      <Button
+        color="inherit"
+        onClick={(e) => setAnchor(e.currentTarget)}
+        aria-haspopup="menu"
+        aria-label={`Account menu for ${user.name}`}
+        startIcon={
+          <Avatar sx={{ width: 28, height: 28, fontSize: 14, bgcolor: 'secondary.main' }}>{user.name.slice(0, 1).toUpperCase()}</Avatar>
+        }
+      >
         {user.name}
       </Button>
       <Menu anchorEl={anchor} open={anchor !== null} onClose={close}>
         <MenuItem disabled sx={{ opacity: '1 !important', display: 'block' }}>
           <Typography variant="body2">{user.email}</Typography>
-          <Typography variant="caption" color="text.secondary">Role: {user.role}</Typography>
+          <Typography variant="caption" color="text.secondary">
+            Role: {user.role}
+          </Typography>
         </MenuItem>
         <Divider />
-        <MenuItem onClick={() => { close(); navigate('/account'); }}>
-          <ListItemIcon><KeyOutlined fontSize="small" /></ListItemIcon>Change password
+        <MenuItem
+          onClick={() => {
+            close();
+            navigate('/account');
+          }}
+        >
+          <ListItemIcon>
+            <KeyOutlined fontSize="small" />
+          </ListItemIcon>
+          Change password
         </MenuItem>
-        <MenuItem onClick={() => { close(); signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') }); }}>
-          <ListItemIcon><Logout fontSize="small" /></ListItemIcon>Sign out
+        <MenuItem
+          onClick={() => {
+            close();
+            signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') });
+          }}
+        >
+          <ListItemIcon>
+            <Logout fontSize="small" />
+          </ListItemIcon>
+          Sign out
         </MenuItem>
       </Menu>
     </>

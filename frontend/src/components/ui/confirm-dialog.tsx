@@ -17,7 +17,9 @@ export function ConfirmDialog({ open, title, body, confirmLabel, destructive, bu
   return (
     <Dialog open={open} onClose={onClose} aria-labelledby="confirm-title" maxWidth="xs" fullWidth>
       <DialogTitle id="confirm-title">{title}</DialogTitle>
-      <DialogContent><DialogContentText component="div">{body}</DialogContentText></DialogContent>
+      <DialogContent>
+        <DialogContentText component="div">{body}</DialogContentText>
+      </DialogContent>
       <DialogActions>
         <Button onClick={onClose}>Cancel</Button>
         <Button variant="contained" color={destructive ? 'error' : 'primary'} disabled={busy} onClick={onConfirm}>

@@ -24,8 +24,13 @@ export function ColumnChooser<T>({ table }: { table: Table<T> }) {
       <Menu anchorEl={anchor} open={anchor !== null} onClose={() => setAnchor(null)}>
         {columns.map((column) => (
           <MenuItem key={column.id} dense onClick={() => column.toggleVisibility()}>
-            <Checkbox size="small" checked={column.getIsVisible()} tabIndex={-1} disableRipple
-              slotProps={{ input: { 'aria-label': columnLabel(table, column.id) } }} />
+            <Checkbox
+              size="small"
+              checked={column.getIsVisible()}
+              tabIndex={-1}
+              disableRipple
+              slotProps={{ input: { 'aria-label': columnLabel(table, column.id) } }}
+            />
             <ListItemText primary={columnLabel(table, column.id)} />
           </MenuItem>
         ))}

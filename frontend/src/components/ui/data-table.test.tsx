@@ -6,7 +6,11 @@ import { renderWithProviders } from '../../testing/render.js';
 import { DataTable, type DataTableProps } from './data-table.js';
 import { nextSort, parseSort } from './data-table-sort.js';
 
-interface Row { path: string; title: string; inboundCount: number }
+interface Row {
+  path: string;
+  title: string;
+  inboundCount: number;
+}
 const columns: ColumnDef<Row, unknown>[] = [
   { accessorKey: 'title', header: 'Title' },
   { accessorKey: 'inboundCount', header: 'Inbound links', meta: { align: 'right', sortDescFirst: true } },
@@ -19,8 +23,18 @@ const rows: Row[] = [
 
 function setup(overrides: Partial<DataTableProps<Row>> = {}) {
   const props: DataTableProps<Row> = {
-    label: 'Pages', columns, data: rows, total: 120, page: 2, pageSize: 50, sort: 'title', rowId: (r) => r.path,
-    onPageChange: vi.fn(), onPageSizeChange: vi.fn(), onSortChange: vi.fn(), ...overrides,
+    label: 'Pages',
+    columns,
+    data: rows,
+    total: 120,
+    page: 2,
+    pageSize: 50,
+    sort: 'title',
+    rowId: (r) => r.path,
+    onPageChange: vi.fn(),
+    onPageSizeChange: vi.fn(),
+    onSortChange: vi.fn(),
+    ...overrides,
   };
   renderWithProviders(<DataTable {...props} />);
   return props;

@@ -1,11 +1,28 @@
 import { useState, type KeyboardEvent, type ReactNode } from 'react';
 import {
-  flexRender, getCoreRowModel, useReactTable,
-  type ColumnDef, type RowData, type VisibilityState, type Updater,
+  flexRender,
+  getCoreRowModel,
+  useReactTable,
+  type ColumnDef,
+  type RowData,
+  type VisibilityState,
+  type Updater,
 } from '@tanstack/react-table';
 import {
-  Box, Checkbox, Paper, Skeleton, Table, TableBody, TableCell, TableContainer, TableHead,
-  TablePagination, TableRow, TableSortLabel, Toolbar, Typography,
+  Box,
+  Checkbox,
+  Paper,
+  Skeleton,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TablePagination,
+  TableRow,
+  TableSortLabel,
+  Toolbar,
+  Typography,
 } from '@mui/material';
 import { ErrorPanel } from './error-panel.js';
 import { EmptyState } from './empty-state.js';
@@ -99,14 +116,14 @@ export function DataTable<T>(props: DataTableProps<T>) {
     <Paper variant="outlined">
       <Toolbar variant="dense" sx={{ gap: 1, px: { xs: 1, sm: 1.5 } }}>
         <Box sx={{ flex: 1, display: 'flex', gap: 1, alignItems: 'center', flexWrap: 'wrap' }}>
-          {selectable && selected.size > 0
-            ? <Typography variant="body2">{selected.size} selected</Typography>
-            : props.toolbar}
+          {selectable && selected.size > 0 ? <Typography variant="body2">{selected.size} selected</Typography> : props.toolbar}
         </Box>
         <ColumnChooser table={table} />
       </Toolbar>
       {error ? (
-        <Box sx={{ p: 2 }}><ErrorPanel error={error} onRetry={props.onRetry} /></Box>
+        <Box sx={{ p: 2 }}>
+          <ErrorPanel error={error} onRetry={props.onRetry} />
+        </Box>
       ) : (
         <TableContainer>
           <Table size="small" aria-label={label} aria-busy={loading ? 'true' : 'false'}>
@@ -115,8 +132,13 @@ export function DataTable<T>(props: DataTableProps<T>) {
                 <TableRow key={group.id}>
                   {selectable && (
                     <TableCell padding="checkbox">
-                      <Checkbox size="small" checked={allOnPage} indeterminate={someOnPage && !allOnPage} onChange={togglePage}
-                        slotProps={{ input: { 'aria-label': 'Select all rows on this page' } }} />
+                      <Checkbox
+                        size="small"
+                        checked={allOnPage}
+                        indeterminate={someOnPage && !allOnPage}
+                        onChange={togglePage}
+                        slotProps={{ input: { 'aria-label': 'Select all rows on this page' } }}
+                      />
                     </TableCell>
                   )}
                   {group.headers.map((header) => {
@@ -126,11 +148,16 @@ export function DataTable<T>(props: DataTableProps<T>) {
                     return (
                       <TableCell key={header.id} align={meta?.align} sortDirection={active ? (sortSpec!.desc ? 'desc' : 'asc') : false}>
                         {header.column.getCanSort() ? (
-                          <TableSortLabel active={active} direction={active && sortSpec!.desc ? 'desc' : 'asc'}
-                            onClick={() => props.onSortChange(nextSort(sort, header.column.id, meta?.sortDescFirst ?? false))}>
+                          <TableSortLabel
+                            active={active}
+                            direction={active && sortSpec!.desc ? 'desc' : 'asc'}
+                            onClick={() => props.onSortChange(nextSort(sort, header.column.id, meta?.sortDescFirst ?? false))}
+                          >
                             {content}
                           </TableSortLabel>
-                        ) : content}
+                        ) : (
+                          content
+                        )}
                       </TableCell>
                     );
                   })}
@@ -141,22 +168,35 @@ export function DataTable<T>(props: DataTableProps<T>) {
               {loading && !data
                 ? Array.from({ length: Math.min(pageSize, 8) }, (_, i) => (
                     <TableRow key={`skeleton-${i}`}>
-                      {Array.from({ length: visibleCount }, (_, j) => <TableCell key={j}><Skeleton variant="text" /></TableCell>)}
+                      {Array.from({ length: visibleCount }, (_, j) => (
+                        <TableCell key={j}>
+                          <Skeleton variant="text" />
+                        </TableCell>
+                      ))}
                     </TableRow>
                   ))
                 : rows.map((row) => (
-                    <TableRow key={row.id} hover selected={selected.has(row.id)}
+                    <TableRow
+                      key={row.id}
+                      hover
+                      selected={selected.has(row.id)}
                       {...(props.onRowClick && {
                         // Clickable rows are reachable and openable from the keyboard too.
                         tabIndex: 0,
                         onClick: () => props.onRowClick!(row.original),
-                        onKeyDown: (e: KeyboardEvent) => e.key === 'Enter' && e.target === e.currentTarget && props.onRowClick!(row.original),
+                        onKeyDown: (e: KeyboardEvent) =>
+                          e.key === 'Enter' && e.target === e.currentTarget && props.onRowClick!(row.original),
                         sx: { cursor: 'pointer' },
-                      })}>
+                      })}
+                    >
                       {selectable && (
                         <TableCell padding="checkbox" onClick={(e) => e.stopPropagation()}>
-                          <Checkbox size="small" checked={selected.has(row.id)} onChange={() => toggleRow(row.id)}
-                            slotProps={{ input: { 'aria-label': `Select row ${row.id}` } }} />
+                          <Checkbox
+                            size="small"
+                            checked={selected.has(row.id)}
+                            onChange={() => toggleRow(row.id)}
+                            slotProps={{ input: { 'aria-label': `Select row ${row.id}` } }}
+                          />
                         </TableCell>
                       )}
                       {row.getVisibleCells().map((cell) => (
@@ -168,17 +208,24 @@ export function DataTable<T>(props: DataTableProps<T>) {
                   ))}
               {!loading && data && data.length === 0 && (
                 <TableRow>
-                  <TableCell colSpan={visibleCount}>{props.emptyState ?? <EmptyState title="Nothing to show" hint="Try fewer filters." />}</TableCell>
+                  <TableCell colSpan={visibleCount}>
+                    {props.emptyState ?? <EmptyState title="Nothing to show" hint="Try fewer filters." />}
+                  </TableCell>
                 </TableRow>
               )}
             </TableBody>
           </Table>
         </TableContainer>
       )}
-      <TablePagination component="div" count={total} page={Math.max(0, page - 1)} rowsPerPage={pageSize}
+      <TablePagination
+        component="div"
+        count={total}
+        page={Math.max(0, page - 1)}
+        rowsPerPage={pageSize}
         rowsPerPageOptions={props.pageSizeOptions ?? [25, 50, 100, 250, 500]}
         onPageChange={(_, zeroBased) => props.onPageChange(zeroBased + 1)}
-        onRowsPerPageChange={(e) => props.onPageSizeChange(Number(e.target.value))} />
+        onRowsPerPageChange={(e) => props.onPageSizeChange(Number(e.target.value))}
+      />
     </Paper>
   );
 }

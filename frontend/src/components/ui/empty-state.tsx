@@ -17,7 +17,11 @@ export function EmptyState({ title, hint, action, icon }: EmptyStateProps) {
       <Typography variant="h3" component="p" color="text.primary" gutterBottom>
         {title}
       </Typography>
-      {hint && <Typography variant="body2" sx={{ maxWidth: 480, mx: 'auto' }}>{hint}</Typography>}
+      {hint && (
+        <Typography variant="body2" sx={{ maxWidth: 480, mx: 'auto' }}>
+          {hint}
+        </Typography>
+      )}
       {action && <Box sx={{ mt: 2 }}>{action}</Box>}
     </Box>
   );

@@ -23,7 +23,13 @@ export function ErrorPanel({ error, onRetry, title = 'This could not be loaded' 
     <Alert
       severity="error"
       variant="outlined"
-      action={onRetry ? <Button color="inherit" size="small" onClick={onRetry}>Retry</Button> : undefined}
+      action={
+        onRetry ? (
+          <Button color="inherit" size="small" onClick={onRetry}>
+            Retry
+          </Button>
+        ) : undefined
+      }
     >
       <AlertTitle>{title}</AlertTitle>
       {errorMessage(error)}

@@ -26,9 +26,16 @@ export function NotifierProvider({ children }: { children: ReactNode }) {
     <NotifierContext.Provider value={value}>
       {children}
       {current && (
-        <Snackbar key={current.id} open autoHideDuration={current.severity === 'error' ? 8000 : 4000}
-          onClose={(_, reason) => reason !== 'clickaway' && close()} anchorOrigin={{ vertical: 'bottom', horizontal: 'center' }}>
-          <Alert severity={current.severity} variant="filled" onClose={close}>{current.message}</Alert>
+        <Snackbar
+          key={current.id}
+          open
+          autoHideDuration={current.severity === 'error' ? 8000 : 4000}
+          onClose={(_, reason) => reason !== 'clickaway' && close()}
+          anchorOrigin={{ vertical: 'bottom', horizontal: 'center' }}
+        >
+          <Alert severity={current.severity} variant="filled" onClose={close}>
+            {current.message}
+          </Alert>
         </Snackbar>
       )}
     </NotifierContext.Provider>

@@ -4,7 +4,6 @@ import type { PruningDecision, PruningItem, PruningReason } from '@linkloom/shar
 export type { PruningDecision, PruningItem, PruningReason };
 export type PruningStatusFilter = '' | 'undecided' | 'approve' | 'reject' | 'keep' | 'flagged';
 
-
 export interface PruningList {
   items: PruningItem[];
   total: number;
@@ -16,7 +15,12 @@ export interface PruningList {
 }
 
 export const RULE_LABELS: Record<PruningReason['rule'], string> = {
-  orphan: 'Orphan', unreachable: 'Unreachable', 'low-score': 'Low score', stale: 'Stale', thin: 'Thin', nominated: 'Nominated',
+  orphan: 'Orphan',
+  unreachable: 'Unreachable',
+  'low-score': 'Low score',
+  stale: 'Stale',
+  thin: 'Thin',
+  nominated: 'Nominated',
 };
 
 export const DECISION_LABELS: Record<PruningDecision, string> = { approve: 'Approved', reject: 'Rejected', keep: 'Kept (protected)' };

@@ -1,5 +1,14 @@
 // Shapes of the tasks API (API.md "Work"), as GET/POST /api/tasks answer them.
-import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type TaskEventItem, type TaskItem, type TaskKind, type TaskPriority, type TaskStatus } from '@linkloom/shared';
+import {
+  TASK_KINDS,
+  TASK_PRIORITIES,
+  TASK_STATUSES,
+  type TaskEventItem,
+  type TaskItem,
+  type TaskKind,
+  type TaskPriority,
+  type TaskStatus,
+} from '@linkloom/shared';
 
 export { TASK_KINDS, TASK_STATUSES };
 export type { TaskKind, TaskStatus };
@@ -15,7 +24,12 @@ export const KIND_LABELS: Record<TaskKind, string> = {
   other: 'Other',
 };
 
-export const STATUS_LABELS: Record<TaskStatus, string> = { open: 'Open', 'in-progress': 'In progress', done: 'Done', 'wont-fix': 'Won’t fix' };
+export const STATUS_LABELS: Record<TaskStatus, string> = {
+  open: 'Open',
+  'in-progress': 'In progress',
+  done: 'Done',
+  'wont-fix': 'Won’t fix',
+};
 
 export type Task = TaskItem;
 export type TaskEvent = TaskEventItem;

@@ -16,7 +16,11 @@ describe('score gain of a proposed link', () => {
 
   it('equals the gain from a full rebuild, for ordinary and dead-end sources', () => {
     const deadEnd = Array.from({ length: 400 }, (_, u) => u).find((u) => graph.outOffsets[u + 1] === graph.outOffsets[u])!;
-    for (const [source, target] of [[5, 17], [deadEnd, 17], [300, 17]]) {
+    for (const [source, target] of [
+      [5, 17],
+      [deadEnd, 17],
+      [300, 17],
+    ]) {
       const gain = computeScoreGain(graph, current, source, target, { tolerance: 1e-13 });
       expect(Math.abs(gain.gain - rebuiltGain(source, target))).toBeLessThan(1e-11);
       expect(gain.iterations).toBeGreaterThan(0);

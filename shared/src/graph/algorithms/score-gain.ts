@@ -73,7 +73,15 @@ export function computeScoreGainsForTarget(
     transition ??= prepareTransition(graph);
     const result = powerIterate(graph, transition, settings, start, { source, target });
     const newScore = result.scores[target];
-    gains.push({ source, target, gain: newScore - currentScore, currentScore, newScore, iterations: result.iterations, residual: result.residual });
+    gains.push({
+      source,
+      target,
+      gain: newScore - currentScore,
+      currentScore,
+      newScore,
+      iterations: result.iterations,
+      residual: result.residual,
+    });
   }
   return gains;
 }

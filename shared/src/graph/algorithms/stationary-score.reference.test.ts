@@ -21,7 +21,12 @@ function graphologyScores(graph: LinkGraph, damping: number, tolerance: number):
   for (let u = 0; u < graph.nodeCount; u++) {
     for (let j = graph.outOffsets[u]; j < graph.outOffsets[u + 1]; j++) reference.addDirectedEdge(String(u), String(graph.outTargets[j]));
   }
-  const scores = referencePagerank(reference, { alpha: damping, getEdgeWeight: null, tolerance: tolerance / graph.nodeCount, maxIterations: 1000 });
+  const scores = referencePagerank(reference, {
+    alpha: damping,
+    getEdgeWeight: null,
+    tolerance: tolerance / graph.nodeCount,
+    maxIterations: 1000,
+  });
   return Float64Array.from({ length: graph.nodeCount }, (_, u) => scores[String(u)]);
 }
 

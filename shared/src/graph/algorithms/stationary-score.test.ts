@@ -12,7 +12,14 @@ describe('computeStationaryScore against published examples', () => {
     const graph = graphOf(['1', '2', '3', '4', '5', '6'], ['1->2', '1->3', '3->1', '3->2', '3->5', '4->5', '4->6', '5->4', '5->6', '6->4']);
     const { scores, converged } = computeStationaryScore(graph, { damping: 0.9 });
     expect(converged).toBe(true);
-    const published: Array<[number, number]> = [[0.03721, 5], [0.05396, 5], [0.04151, 5], [0.3751, 4], [0.206, 4], [0.2862, 4]];
+    const published: Array<[number, number]> = [
+      [0.03721, 5],
+      [0.05396, 5],
+      [0.04151, 5],
+      [0.3751, 4],
+      [0.206, 4],
+      [0.2862, 4],
+    ];
     published.forEach(([value, decimals], i) => {
       // "to the published precision": within half a unit of the last printed decimal
       expect(Math.abs(scores[i] - value)).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-12);
@@ -23,7 +30,25 @@ describe('computeStationaryScore against published examples', () => {
     // Source: Wikipedia, "PageRank", the eleven-page illustration (d = 0.85, A a dead end), percentages to
     // one decimal. Values from memory, reproduced by an independent computation.
     const ids = 'ABCDEFGHIJK'.split('');
-    const edges = ['B->C', 'C->B', 'D->A', 'D->B', 'E->B', 'E->D', 'E->F', 'F->B', 'F->E', 'G->B', 'G->E', 'H->B', 'H->E', 'I->B', 'I->E', 'J->E', 'K->E'];
+    const edges = [
+      'B->C',
+      'C->B',
+      'D->A',
+      'D->B',
+      'E->B',
+      'E->D',
+      'E->F',
+      'F->B',
+      'F->E',
+      'G->B',
+      'G->E',
+      'H->B',
+      'H->E',
+      'I->B',
+      'I->E',
+      'J->E',
+      'K->E',
+    ];
     const { scores } = computeStationaryScore(graphOf(ids, edges), { damping: 0.85 });
     const percent = [3.3, 38.4, 34.3, 3.9, 8.1, 3.9, 1.6, 1.6, 1.6, 1.6, 1.6];
     percent.forEach((value, i) => expect(Math.abs(100 * scores[i] - value)).toBeLessThanOrEqual(0.05 + 1e-9));

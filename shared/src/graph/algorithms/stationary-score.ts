@@ -150,7 +150,14 @@ function sharesAndDanglingMass(x: Float64Array, invOut: Float64Array, dangling: 
 }
 
 /** next = P^T-pull of share + base; returns the L1 change |next - x|. */
-function pullUniform(inOffsets: Int32Array, inSources: Int32Array, share: Float64Array, base: number, x: Float64Array, next: Float64Array): number {
+function pullUniform(
+  inOffsets: Int32Array,
+  inSources: Int32Array,
+  share: Float64Array,
+  base: number,
+  x: Float64Array,
+  next: Float64Array,
+): number {
   let residual = 0;
   for (let v = 0; v < x.length; v++) {
     let sum = base;
@@ -161,7 +168,15 @@ function pullUniform(inOffsets: Int32Array, inSources: Int32Array, share: Float6
   return residual;
 }
 
-function pullWeighted(inOffsets: Int32Array, inSources: Int32Array, share: Float64Array, weight: number, teleport: Float64Array, x: Float64Array, next: Float64Array): number {
+function pullWeighted(
+  inOffsets: Int32Array,
+  inSources: Int32Array,
+  share: Float64Array,
+  weight: number,
+  teleport: Float64Array,
+  x: Float64Array,
+  next: Float64Array,
+): number {
   let residual = 0;
   for (let v = 0; v < x.length; v++) {
     let sum = weight * teleport[v];

@@ -15,7 +15,12 @@ const REFERENCE_BUDGET_MS = 60_000;
 /** A reference run past 60 s already ends the comparison; 120 s lets it report how long it took. */
 const KILL_MS = { linkloom: 600_000, graphology: 120_000 } as const;
 
-interface Flags { sizes: Array<keyof typeof SIZES>; damping: number; tolerance: number; edgesFile?: string }
+interface Flags {
+  sizes: Array<keyof typeof SIZES>;
+  damping: number;
+  tolerance: number;
+  edgesFile?: string;
+}
 
 function parseFlags(argv: readonly string[]): Flags {
   const flags: Flags = { sizes: ['small', 'medium', 'large'], damping: 0.85, tolerance: 1e-6 };
@@ -40,7 +45,9 @@ function checkSize(size: string): keyof typeof SIZES {
 function runChild(job: MeasureJob): Promise<{ results: Measurement[]; error?: string; wallMs: number }> {
   const started = performance.now();
   return new Promise((resolve) => {
-    const child = spawn(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url), '--child', JSON.stringify(job)], { stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url), '--child', JSON.stringify(job)], {
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let out = '';
     let err = '';
     child.stdout.on('data', (chunk) => (out += chunk));
@@ -52,17 +59,30 @@ function runChild(job: MeasureJob): Promise<{ results: Measurement[]; error?: st
       const wallMs = performance.now() - started;
       const line = out.split('\n').find((l) => l.startsWith('RESULT '));
       if (code === 0 && line) resolve({ results: JSON.parse(line.slice(7)) as Measurement[], wallMs });
-      else resolve({ results: [], wallMs, error: signal === 'SIGKILL' ? `killed after ${killMs / 1000} s` : `exit ${code ?? signal}: ${lastLine(err)}` });
+      else
+        resolve({
+          results: [],
+          wallMs,
+          error: signal === 'SIGKILL' ? `killed after ${killMs / 1000} s` : `exit ${code ?? signal}: ${lastLine(err)}`,
+        });
     });
   });
 }
 
 function lastLine(text: string): string {
-  return text.trim().split('\n').filter((l) => l.trim()).slice(-1)[0] ?? '';
+  return (
+    text
+      .trim()
+      .split('\n')
+      .filter((l) => l.trim())
+      .slice(-1)[0] ?? ''
+  );
 }
 
 function report(m: Measurement): void {
-  console.log(`BENCH ${JSON.stringify({ label: m.label, engine: m.engine, nodes: m.nodes, edges: m.edges, tolerance: m.tolerance, buildMs: round(m.buildMs), scoreMs: round(m.scoreMs), buildCpuMs: round(m.buildCpuMs), scoreCpuMs: round(m.scoreCpuMs), iterations: m.iterations, residual: m.residual, rssMb: m.rssMb, distinctEdges: m.distinctEdges, topScore: m.topScore })}`);
+  console.log(
+    `BENCH ${JSON.stringify({ label: m.label, engine: m.engine, nodes: m.nodes, edges: m.edges, tolerance: m.tolerance, buildMs: round(m.buildMs), scoreMs: round(m.scoreMs), buildCpuMs: round(m.buildCpuMs), scoreCpuMs: round(m.scoreCpuMs), iterations: m.iterations, residual: m.residual, rssMb: m.rssMb, distinctEdges: m.distinctEdges, topScore: m.topScore })}`,
+  );
 }
 
 const round = (ms: number) => Math.round(ms * 10) / 10;
@@ -70,8 +90,21 @@ const round = (ms: number) => Math.round(ms * 10) / 10;
 function printTable(rows: Measurement[]): void {
   console.log('\nlabel      engine              tol     nodes      links       build ms  score ms  total ms   (cpu ms)  iter  peak RSS MB');
   for (const m of rows) {
-    const cells = [m.label.padEnd(10), m.engine.padEnd(19), m.tolerance.toExponential(0).padEnd(7), String(m.nodes).padStart(9), String(m.edges).padStart(10),
-      round(m.buildMs).toFixed(1).padStart(10), round(m.scoreMs).toFixed(1).padStart(9), round(m.buildMs + m.scoreMs).toFixed(1).padStart(9), `(${round(m.buildCpuMs + m.scoreCpuMs).toFixed(0)})`.padStart(10), String(m.iterations ?? '-').padStart(5), String(m.rssMb).padStart(12)];
+    const cells = [
+      m.label.padEnd(10),
+      m.engine.padEnd(19),
+      m.tolerance.toExponential(0).padEnd(7),
+      String(m.nodes).padStart(9),
+      String(m.edges).padStart(10),
+      round(m.buildMs).toFixed(1).padStart(10),
+      round(m.scoreMs).toFixed(1).padStart(9),
+      round(m.buildMs + m.scoreMs)
+        .toFixed(1)
+        .padStart(9),
+      `(${round(m.buildCpuMs + m.scoreCpuMs).toFixed(0)})`.padStart(10),
+      String(m.iterations ?? '-').padStart(5),
+      String(m.rssMb).padStart(12),
+    ];
     console.log(cells.join(' '));
   }
 }
@@ -81,7 +114,9 @@ function printComparison(rows: Measurement[], tolerance: number): void {
     const ours = rows.find((m) => m.engine === 'linkloom' && m.label === ref.label && m.tolerance === tolerance);
     if (!ours) continue;
     const ratio = (a: number, b: number) => (a / b).toFixed(1);
-    console.log(`${ref.label}: linkloom vs graphology-metrics at tol ${tolerance}: build ${ratio(ref.buildMs, ours.buildMs)}x, score ${ratio(ref.scoreMs, ours.scoreMs)}x, build+score ${ratio(ref.buildMs + ref.scoreMs, ours.buildMs + ours.scoreMs)}x faster; top score ${ours.topScore.toExponential(9)} vs ${ref.topScore.toExponential(9)}`);
+    console.log(
+      `${ref.label}: linkloom vs graphology-metrics at tol ${tolerance}: build ${ratio(ref.buildMs, ours.buildMs)}x, score ${ratio(ref.scoreMs, ours.scoreMs)}x, build+score ${ratio(ref.buildMs + ref.scoreMs, ours.buildMs + ours.scoreMs)}x faster; top score ${ours.topScore.toExponential(9)} vs ${ref.topScore.toExponential(9)}`,
+    );
   }
 }
 
@@ -107,14 +142,18 @@ async function main(argv: readonly string[]): Promise<void> {
     if (ref.error) console.log(`${data.label} graphology-metrics failed: ${ref.error}`);
     ref.results.forEach(report);
     rows.push(...ref.results);
-    if (ref.error || ref.wallMs > REFERENCE_BUDGET_MS) referenceSkipped = `the previous size took ${(ref.wallMs / 1000).toFixed(0)} s (budget 60 s)`;
+    if (ref.error || ref.wallMs > REFERENCE_BUDGET_MS)
+      referenceSkipped = `the previous size took ${(ref.wallMs / 1000).toFixed(0)} s (budget 60 s)`;
   }
   printTable(rows);
   printComparison(rows, flags.tolerance);
   console.log(`load average ${loadLine()} at end (other work on the machine inflates wall times)`);
 }
 
-const loadLine = () => loadavg().map((l) => l.toFixed(2)).join(' ');
+const loadLine = () =>
+  loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' ');
 
 if (process.argv[2] === '--child') {
   const results = measure(JSON.parse(process.argv[3]) as MeasureJob);

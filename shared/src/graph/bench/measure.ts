@@ -66,8 +66,25 @@ function measureLinkloom(job: MeasureJob, input: SyntheticGraph): Measurement[] 
     const result = computeStationaryScore(graph, { damping: job.damping, tolerance });
     const scoreMs = performance.now() - t1;
     const scoreCpuMs = cpuMs() - c1;
-    const common = { label: job.label, engine: 'linkloom', nodes: input.nodeCount, edges: input.pairs.length / 2, distinctEdges: graph.edgeCount };
-    return { ...common, tolerance, buildMs, scoreMs, buildCpuMs, scoreCpuMs, iterations: result.iterations, residual: result.residual, topScore: max(result.scores), rssMb: peakRssMb() };
+    const common = {
+      label: job.label,
+      engine: 'linkloom',
+      nodes: input.nodeCount,
+      edges: input.pairs.length / 2,
+      distinctEdges: graph.edgeCount,
+    };
+    return {
+      ...common,
+      tolerance,
+      buildMs,
+      scoreMs,
+      buildCpuMs,
+      scoreCpuMs,
+      iterations: result.iterations,
+      residual: result.residual,
+      topScore: max(result.scores),
+      rssMb: peakRssMb(),
+    };
   });
 }
 
@@ -86,13 +103,30 @@ function measureGraphology(job: MeasureJob, input: SyntheticGraph): Measurement 
   const t1 = performance.now();
   const c1 = cpuMs();
   // graphology stops when the summed change is below N * tolerance: pass tolerance / N for our L1 rule.
-  const scores = referencePagerank(graph, { alpha: job.damping, getEdgeWeight: null, tolerance: tolerance / input.nodeCount, maxIterations: 1000 });
+  const scores = referencePagerank(graph, {
+    alpha: job.damping,
+    getEdgeWeight: null,
+    tolerance: tolerance / input.nodeCount,
+    maxIterations: 1000,
+  });
   const scoreMs = performance.now() - t1;
   const scoreCpuMs = cpuMs() - c1;
   const top = Object.values(scores).reduce((a, b) => Math.max(a, b), 0);
   return {
-    label: job.label, engine: 'graphology-metrics', nodes: input.nodeCount, edges: input.pairs.length / 2, distinctEdges: graph.size,
-    tolerance, buildMs, scoreMs, buildCpuMs, scoreCpuMs, iterations: null, residual: null, topScore: top, rssMb: peakRssMb(),
+    label: job.label,
+    engine: 'graphology-metrics',
+    nodes: input.nodeCount,
+    edges: input.pairs.length / 2,
+    distinctEdges: graph.size,
+    tolerance,
+    buildMs,
+    scoreMs,
+    buildCpuMs,
+    scoreCpuMs,
+    iterations: null,
+    residual: null,
+    topScore: top,
+    rssMb: peakRssMb(),
   };
 }
 

@@ -3,7 +3,10 @@ import { buildGraphFromEdgePairs, buildLinkGraph, type LinkGraph } from '../buil
 
 /** Graph from edges written "a->b" between single-letter or numbered pages, in the order pageIds gives. */
 export function graphOf(pageIds: readonly string[], edges: readonly string[]): LinkGraph {
-  return buildLinkGraph(pageIds, edges.map((e) => e.split('->') as [string, string])).graph;
+  return buildLinkGraph(
+    pageIds,
+    edges.map((e) => e.split('->') as [string, string]),
+  ).graph;
 }
 
 /** Deterministic pseudo-random numbers in [0, 1) (mulberry32, a public-domain generator). */
@@ -22,7 +25,13 @@ export function seededRandom(seed: number): () => number {
  * Random graph with several components and dead ends: nodes split into `parts` blocks, each block's
  * nodes link only inside the block, and about `deadEndShare` of nodes have no out-links.
  */
-export function randomSplitGraph(seed: number, n: number, edgesPerNode: number, parts: number, deadEndShare: number): { graph: LinkGraph; pairs: Int32Array } {
+export function randomSplitGraph(
+  seed: number,
+  n: number,
+  edgesPerNode: number,
+  parts: number,
+  deadEndShare: number,
+): { graph: LinkGraph; pairs: Int32Array } {
   const random = seededRandom(seed);
   const blockOf = (u: number) => Math.floor((u * parts) / n);
   const blockStart = (b: number) => Math.ceil((b * n) / parts);

@@ -8,4 +8,5 @@ import { createRequire } from 'node:module';
 const require = createRequire(import.meta.url);
 
 export const ReferenceGraph = require('graphology') as typeof import('graphology').default;
-export const referencePagerank = require('graphology-metrics/centrality/pagerank.js') as typeof import('graphology-metrics/centrality/pagerank.js').default;
+export const referencePagerank =
+  require('graphology-metrics/centrality/pagerank.js') as typeof import('graphology-metrics/centrality/pagerank.js').default;

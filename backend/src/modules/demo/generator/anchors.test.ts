@@ -8,11 +8,20 @@ describe('pageAnchors', () => {
     const headings = ['Steps', 'Steps', 'Before you start!', 'How-to: lending desk', 'Steps', 'Steps 1'];
     const slugger = new GithubSlugger();
     const want = ['Lending policy', ...headings].map((h) => slugger.slug(h));
-    expect(pageAnchors('Lending policy', headings.map((h) => `## ${h}`))).toEqual(want);
+    expect(
+      pageAnchors(
+        'Lending policy',
+        headings.map((h) => `## ${h}`),
+      ),
+    ).toEqual(want);
   });
 
   it('uses an explicit {#id} instead of the slug and adds raw HTML ids', () => {
-    expect(pageAnchors('Deposits', ['## Deposit bands {#deposit-bands}'], ['key-register'])).toEqual(['deposits', 'deposit-bands', 'key-register']);
+    expect(pageAnchors('Deposits', ['## Deposit bands {#deposit-bands}'], ['key-register'])).toEqual([
+      'deposits',
+      'deposit-bands',
+      'key-register',
+    ]);
   });
 
   it('drops punctuation and keeps hyphens and underscores', () => {

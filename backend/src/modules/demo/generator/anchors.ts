@@ -6,7 +6,10 @@
 const CUSTOM_ID = /\s*\{#([A-Za-z0-9_-]+)\}\s*$/;
 
 export function headingText(line: string): string {
-  return line.replace(/^#+\s+/, '').replace(CUSTOM_ID, '').trim();
+  return line
+    .replace(/^#+\s+/, '')
+    .replace(CUSTOM_ID, '')
+    .trim();
 }
 
 export function customId(line: string): string | undefined {
@@ -14,7 +17,10 @@ export function customId(line: string): string | undefined {
 }
 
 export function slugOf(text: string): string {
-  return text.toLowerCase().replace(/[^a-z0-9 _-]/g, '').replace(/ /g, '-');
+  return text
+    .toLowerCase()
+    .replace(/[^a-z0-9 _-]/g, '')
+    .replace(/ /g, '-');
 }
 
 /** Anchors of a page: the H1 title, then the heading lines in order; custom ids replace the slug. */

@@ -20,7 +20,10 @@ import { generateDemoHandbook, renderHandbook } from './generate-demo-handbook.j
 const parser = unified().use(remarkParse).use(remarkFrontmatter, ['yaml']).use(remarkGfm);
 const WIKI = /!?\[\[([^\]|]+)(?:\|[^\]]*)?\]\]/g;
 
-interface Probe { links: string[]; headings: Array<{ text: string; depth: number }> }
+interface Probe {
+  links: string[];
+  headings: Array<{ text: string; depth: number }>;
+}
 
 function htmlHrefs(html: string): string[] {
   const hrefs: string[] = [];
@@ -72,7 +75,10 @@ describe.each([1, 2, 3] as const)('demo handbook version %i, read by remark', (v
 
   it('finds exactly the links the generator recorded, on the recorded lines', () => {
     for (const page of pages) {
-      const mine = links.filter((l) => l.source === page.path).map((l) => `${l.line}|${l.href}`).sort();
+      const mine = links
+        .filter((l) => l.source === page.path)
+        .map((l) => `${l.line}|${l.href}`)
+        .sort();
       expect(probes.get(page.path)!.links, page.path).toEqual(mine);
     }
   });
@@ -88,9 +94,28 @@ describe.each([1, 2, 3] as const)('demo handbook version %i, read by remark', (v
     expect(has((h) => /^https:\/\/(?!brackenridge-tools)/.test(h))).toBe(true);
     expect(has((h) => /\.md#[\w-]+$/.test(h))).toBe(true);
     const forms = new Set(links.map((l) => l.form));
-    for (const f of ['relative', 'root-absolute', 'site-url', 'site-autolink', 'wiki', 'wiki-label', 'wiki-heading',
-      'wiki-title', 'embed', 'reference-full', 'reference-collapsed', 'reference-shortcut', 'html', 'image',
-      'wiki-image', 'autolink', 'bare-url', 'inline-raw', 'empty'] as const) expect(forms, f).toContain(f);
+    for (const f of [
+      'relative',
+      'root-absolute',
+      'site-url',
+      'site-autolink',
+      'wiki',
+      'wiki-label',
+      'wiki-heading',
+      'wiki-title',
+      'embed',
+      'reference-full',
+      'reference-collapsed',
+      'reference-shortcut',
+      'html',
+      'image',
+      'wiki-image',
+      'autolink',
+      'bare-url',
+      'inline-raw',
+      'empty',
+    ] as const)
+      expect(forms, f).toContain(f);
   });
 
   it('has duplicate headings and {#custom-id} headings; the generator agrees with github-slugger', () => {
@@ -110,8 +135,15 @@ describe.each([1, 2, 3] as const)('demo handbook version %i, read by remark', (v
 
   it('states each seeded finding at a line of its source file that holds the raw href', () => {
     const { expected } = generateDemoHandbook(version);
-    const findings = [...expected.brokenLinks, ...expected.brokenAnchors, ...expected.brokenAssets, ...expected.unsafe,
-      ...expected.ambiguous, ...expected.redirected, ...expected.outOfScope];
+    const findings = [
+      ...expected.brokenLinks,
+      ...expected.brokenAnchors,
+      ...expected.brokenAssets,
+      ...expected.unsafe,
+      ...expected.ambiguous,
+      ...expected.redirected,
+      ...expected.outOfScope,
+    ];
     expect(findings.length).toBeGreaterThan(8);
     for (const f of findings) {
       const line = (files[f.sourcePath] as string).split('\n')[f.line - 1]!;

@@ -3,8 +3,15 @@ import { buildGraph, clickDepths, expectedFindings, weakComponents } from './exp
 import type { PagePlan, RenderedLink } from './types.js';
 
 const page = (path: string): PagePlan => ({ path, title: path, section: '', kind: 'page', tags: [], reviewed: '2026-01-01', headings: [] });
-const link = (source: string, target: string, status: RenderedLink['status'] = 'page'): RenderedLink =>
-  ({ source, target, status, form: 'relative', label: '', href: target, line: 1 });
+const link = (source: string, target: string, status: RenderedLink['status'] = 'page'): RenderedLink => ({
+  source,
+  target,
+  status,
+  form: 'relative',
+  label: '',
+  href: target,
+  line: 1,
+});
 
 // Hand-drawn graph, answers worked out on paper:
 //   index -> a -> b -> c -> d   (d is 4 clicks deep; d is a dead end)
@@ -14,13 +21,24 @@ const link = (source: string, target: string, status: RenderedLink['status'] = '
 //   index -> a#missing (broken anchor) and a broken link from b: neither adds an edge
 const PAGES = ['index', 'a', 'b', 'c', 'd', 'e', 'o', 'x', 'y'].map(page);
 const LINKS = [
-  link('index', 'a'), link('a', 'b'), link('b', 'c'), link('c', 'd'), link('index', 'e'), link('e', 'e'),
-  link('o', 'a'), link('x', 'y'), link('y', 'x'), link('index', 'a', 'broken-anchor'),
+  link('index', 'a'),
+  link('a', 'b'),
+  link('b', 'c'),
+  link('c', 'd'),
+  link('index', 'e'),
+  link('e', 'e'),
+  link('o', 'a'),
+  link('x', 'y'),
+  link('y', 'x'),
+  link('index', 'a', 'broken-anchor'),
   { ...link('b', 'nowhere', 'broken'), target: undefined },
 ];
 
 describe('expectedFindings on a hand-drawn graph', () => {
-  const graph = buildGraph(PAGES.map((p) => p.path), LINKS);
+  const graph = buildGraph(
+    PAGES.map((p) => p.path),
+    LINKS,
+  );
 
   it('counts one edge per linked pair and ignores self links and broken links', () => {
     expect([...graph.edges.get('index')!].sort()).toEqual(['a', 'e']);
@@ -34,7 +52,11 @@ describe('expectedFindings on a hand-drawn graph', () => {
   });
 
   it('splits the graph into weakly connected components', () => {
-    expect(weakComponents(graph).map((c) => c.join(',')).sort()).toEqual(['a,b,c,d,e,index,o', 'x,y']);
+    expect(
+      weakComponents(graph)
+        .map((c) => c.join(','))
+        .sort(),
+    ).toEqual(['a,b,c,d,e,index,o', 'x,y']);
   });
 
   it('derives orphans, dead ends, unreachable, deep pages and islands', () => {

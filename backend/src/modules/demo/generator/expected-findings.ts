@@ -27,7 +27,10 @@ export function clickDepths(graph: GraphModel, entryPages: readonly string[]): M
   for (let head = 0; head < queue.length; head++) {
     const u = queue[head]!;
     for (const v of graph.edges.get(u) ?? []) {
-      if (!depth.has(v)) { depth.set(v, depth.get(u)! + 1); queue.push(v); }
+      if (!depth.has(v)) {
+        depth.set(v, depth.get(u)! + 1);
+        queue.push(v);
+      }
     }
   }
   return depth;
@@ -36,7 +39,10 @@ export function clickDepths(graph: GraphModel, entryPages: readonly string[]): M
 export function weakComponents(graph: GraphModel): string[][] {
   const parent = new Map(graph.pages.map((p) => [p, p]));
   const find = (x: string): string => {
-    while (parent.get(x) !== x) { parent.set(x, parent.get(parent.get(x)!)!); x = parent.get(x)!; }
+    while (parent.get(x) !== x) {
+      parent.set(x, parent.get(parent.get(x)!)!);
+      x = parent.get(x)!;
+    }
     return x;
   };
   for (const [u, targets] of graph.edges) for (const v of targets) parent.set(find(u), find(v));
@@ -47,8 +53,19 @@ export function weakComponents(graph: GraphModel): string[][] {
 
 const finding = (l: RenderedLink): LinkFinding => ({ sourcePath: l.source, href: l.href, line: l.line });
 
-export function expectedFindings(pages: readonly PagePlan[], links: readonly RenderedLink[], entryPages: string[], depthThreshold = 3, graph?: GraphModel): ExpectedFindings {
-  const g = graph ?? buildGraph(pages.map((p) => p.path), links);
+export function expectedFindings(
+  pages: readonly PagePlan[],
+  links: readonly RenderedLink[],
+  entryPages: string[],
+  depthThreshold = 3,
+  graph?: GraphModel,
+): ExpectedFindings {
+  const g =
+    graph ??
+    buildGraph(
+      pages.map((p) => p.path),
+      links,
+    );
   const inbound = new Map(g.pages.map((p) => [p, 0]));
   for (const targets of g.edges.values()) for (const v of targets) inbound.set(v, inbound.get(v)! + 1);
   const depth = clickDepths(g, entryPages);

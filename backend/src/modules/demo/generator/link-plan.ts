@@ -54,7 +54,7 @@ export function planLinks(pages: readonly PagePlan[], version: HandbookVersion):
     const parent = listingParent(page.path, exists);
     if (parent && !unlisted(page.path)) links.push(pageLink(parent, page));
     if (deadEnds.has(page.path) || islandPages.has(page.path) || page.kind === 'entry') continue;
-    const up = orphans.has(page.path) ? parent ?? 'index.md' : parent;
+    const up = orphans.has(page.path) ? (parent ?? 'index.md') : parent;
     if (up) links.push(pageLink(page.path, byPath.get(up)!));
     if (orphans.has(page.path) || page.kind === 'index') continue;
     const sameSection = pool.filter((p) => p !== page.path && p.startsWith(`${page.section}/`));
@@ -67,7 +67,6 @@ export function planLinks(pages: readonly PagePlan[], version: HandbookVersion):
     island.forEach((p, i) => links.push(pageLink(p, byPath.get(island[(i + 1) % island.length]!)!)));
     for (const p of island.slice(2)) links.push(pageLink(island[0]!, byPath.get(p)!));
   }
-  for (const chain of changes.deepChains)
-    chain.slice(1).forEach((p, i) => links.push(pageLink(chain[i]!, byPath.get(p)!)));
+  for (const chain of changes.deepChains) chain.slice(1).forEach((p, i) => links.push(pageLink(chain[i]!, byPath.get(p)!)));
   return [...links, ...specialLinks(version, exists)];
 }

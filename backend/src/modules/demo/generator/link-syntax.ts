@@ -63,27 +63,46 @@ function wikiHref(link: PlannedLink, ctx: SyntaxContext): string {
 export function linkSyntax(link: PlannedLink, ctx: SyntaxContext): LinkSyntax {
   const title = ctx.pages.get(link.target ?? '')?.title ?? link.label;
   switch (link.form) {
-    case 'wiki': case 'wiki-title': case 'wiki-heading': case 'wiki-image': {
+    case 'wiki':
+    case 'wiki-title':
+    case 'wiki-heading':
+    case 'wiki-image': {
       const href = wikiHref(link, ctx);
       return { snippet: link.form === 'wiki-image' ? `![[${href}]]` : `[[${href}]]`, href };
     }
-    case 'wiki-label': { const href = wikiHref(link, ctx); return { snippet: `[[${href}|${link.label}]]`, href }; }
-    case 'embed': { const href = wikiHref(link, ctx); return { snippet: `![[${href}]]`, href }; }
-    case 'empty': return { snippet: `[${link.label}]()`, href: '' };
-    case 'bare-url': return { snippet: link.rawHref!, href: link.rawHref! };
-    default: break;
+    case 'wiki-label': {
+      const href = wikiHref(link, ctx);
+      return { snippet: `[[${href}|${link.label}]]`, href };
+    }
+    case 'embed': {
+      const href = wikiHref(link, ctx);
+      return { snippet: `![[${href}]]`, href };
+    }
+    case 'empty':
+      return { snippet: `[${link.label}]()`, href: '' };
+    case 'bare-url':
+      return { snippet: link.rawHref!, href: link.rawHref! };
+    default:
+      break;
   }
   const href = hrefOf(link, ctx);
   switch (link.form) {
-    case 'site-autolink': case 'autolink': return { snippet: `<${href}>`, href };
-    case 'image': return { snippet: `![${link.label}](${href})`, href };
-    case 'html': return { snippet: `<a href="${href}">${link.label}</a>`, href };
+    case 'site-autolink':
+    case 'autolink':
+      return { snippet: `<${href}>`, href };
+    case 'image':
+      return { snippet: `![${link.label}](${href})`, href };
+    case 'html':
+      return { snippet: `<a href="${href}">${link.label}</a>`, href };
     case 'reference-full': {
       const id = ctx.nextRef();
       return { snippet: `[${link.label}][${id}]`, href, definition: `[${id}]: ${href}` };
     }
-    case 'reference-collapsed': return { snippet: `[${title}][]`, href, definition: `[${title}]: ${href}` };
-    case 'reference-shortcut': return { snippet: `[${title}]`, href, definition: `[${title}]: ${href}` };
-    default: return { snippet: `[${link.label}](${href})`, href };
+    case 'reference-collapsed':
+      return { snippet: `[${title}][]`, href, definition: `[${title}]: ${href}` };
+    case 'reference-shortcut':
+      return { snippet: `[${title}]`, href, definition: `[${title}]: ${href}` };
+    default:
+      return { snippet: `[${link.label}](${href})`, href };
   }
 }

@@ -25,12 +25,30 @@ const SPECIAL_HEADINGS: Record<string, string[]> = {
 };
 
 const ARCHIVE_TOPICS = [
-  '2018-depot-keys', '2019-van-rota', '2020-fix-night-poster', '2019-first-depot-opening', '2019-paper-loan-cards',
-  '2020-lockdown-click-and-collect', '2020-doorstep-returns', '2021-volunteer-census', '2021-old-fee-bands',
-  '2021-spreadsheet-catalogue', '2022-hatchbook-migration', '2022-van-lease-review', '2022-millbrook-flood',
-  '2023-tool-amnesty-results', '2023-depot-hours-trial', '2023-sewing-club-pilot', '2024-old-safety-induction',
-  '2024-retired-tool-list', '2024-north-quarry-move', '2019-founding-minutes', '2020-grant-report',
-  '2021-board-away-day', '2022-fix-night-survey', '2023-signage-refresh',
+  '2018-depot-keys',
+  '2019-van-rota',
+  '2020-fix-night-poster',
+  '2019-first-depot-opening',
+  '2019-paper-loan-cards',
+  '2020-lockdown-click-and-collect',
+  '2020-doorstep-returns',
+  '2021-volunteer-census',
+  '2021-old-fee-bands',
+  '2021-spreadsheet-catalogue',
+  '2022-hatchbook-migration',
+  '2022-van-lease-review',
+  '2022-millbrook-flood',
+  '2023-tool-amnesty-results',
+  '2023-depot-hours-trial',
+  '2023-sewing-club-pilot',
+  '2024-old-safety-induction',
+  '2024-retired-tool-list',
+  '2024-north-quarry-move',
+  '2019-founding-minutes',
+  '2020-grant-report',
+  '2021-board-away-day',
+  '2022-fix-night-survey',
+  '2023-signage-refresh',
 ];
 
 export function folderOf(path: string): string {
@@ -48,8 +66,20 @@ export function buildPagePlans(version: HandbookVersion): PagePlan[] {
   const paths: Array<[string, PagePlan['kind'], string?]> = [['index.md', 'entry', 'Brackenridge Handbook']];
   const add = (path: string, kind: PagePlan['kind'], title?: string) => paths.push([path, kind, title]);
   add('onboarding/index.md', 'index', 'Onboarding');
-  for (const s of ['first-week', 'meet-the-network', 'how-we-decide', 'tool-safety-basics', 'your-first-steward-shift',
-    'using-hatchbook', 'who-to-ask', 'depot-tour', 'buddy-scheme', 'shadowing', 'feedback', 'expenses-quickstart'])
+  for (const s of [
+    'first-week',
+    'meet-the-network',
+    'how-we-decide',
+    'tool-safety-basics',
+    'your-first-steward-shift',
+    'using-hatchbook',
+    'who-to-ask',
+    'depot-tour',
+    'buddy-scheme',
+    'shadowing',
+    'feedback',
+    'expenses-quickstart',
+  ])
     add(`onboarding/${s}.md`, 'page');
   add('teams/index.md', 'index', 'Teams');
   for (const [team, topics] of Object.entries(TEAMS)) {
@@ -78,11 +108,30 @@ export function buildPagePlans(version: HandbookVersion): PagePlan[] {
     add(`reference/legacy-kiosk/${k}.md`, 'reference', k === 'index' ? 'Self-service kiosk (legacy)' : undefined);
   add('runbooks/index.md', 'index', 'Runbooks');
   add('runbooks/vehicles/van-fleet/index.md', 'index', 'Van fleet runbooks');
-  for (const r of ['brake-service', 'brake-service-rear-hub', 'rear-hub-bearing-press']) add(`runbooks/vehicles/van-fleet/${r}.md`, 'runbook');
-  for (const r of ['power-cut', 'flood-at-depot', 'hatchbook-down', 'lost-keys', 'van-breakdown', 'fire-alarm',
-    'data-breach', 'stolen-tool', 'heatwave-opening', 'snow-closure', 'volunteer-injury', 'till-shortfall',
-    'card-reader-down', 'internet-down', 'it-outage', 'burst-pipe', 'gas-smell', 'break-in', 'lost-child-at-fix-night',
-    'van-accident'])
+  for (const r of ['brake-service', 'brake-service-rear-hub', 'rear-hub-bearing-press'])
+    add(`runbooks/vehicles/van-fleet/${r}.md`, 'runbook');
+  for (const r of [
+    'power-cut',
+    'flood-at-depot',
+    'hatchbook-down',
+    'lost-keys',
+    'van-breakdown',
+    'fire-alarm',
+    'data-breach',
+    'stolen-tool',
+    'heatwave-opening',
+    'snow-closure',
+    'volunteer-injury',
+    'till-shortfall',
+    'card-reader-down',
+    'internet-down',
+    'it-outage',
+    'burst-pipe',
+    'gas-smell',
+    'break-in',
+    'lost-child-at-fix-night',
+    'van-accident',
+  ])
     add(`runbooks/${r}.md`, 'runbook');
   add('archive/index.md', 'index', 'Archive');
   for (const a of ARCHIVE_TOPICS) add(`archive/${a}.md`, 'archive');

@@ -13,7 +13,10 @@ class PageWriter {
   readonly lines: string[] = [];
   readonly links: RenderedLink[] = [];
   readonly definitions = new Map<string, string>();
-  constructor(private readonly ctx: SyntaxContext, private readonly random: Random) {}
+  constructor(
+    private readonly ctx: SyntaxContext,
+    private readonly random: Random,
+  ) {}
 
   push(...lines: string[]): void {
     this.lines.push(...lines);
@@ -41,20 +44,42 @@ function frontMatter(page: PagePlan): string[] {
 function kindBlock(page: PagePlan, heading: string, random: Random): string[] {
   const h = heading.replace(/^#+\s+/, '');
   if (h === 'Steps') {
-    return ['1. ' + fillerSentence(random), '2. ' + fillerSentence(random), '3. ' + fillerSentence(random), '',
-      'Paste this note into Hatchbook when you are done (it is an example, not a link):', '',
-      '```markdown', 'Checked against [the old slip](forms/loan-slip-v1.md) and [[Paper Loan Cards]].',
-      '<a href="../../nowhere.md">legacy form</a> https://old.brackenridge-tools.example/slips', '```', ''];
+    return [
+      '1. ' + fillerSentence(random),
+      '2. ' + fillerSentence(random),
+      '3. ' + fillerSentence(random),
+      '',
+      'Paste this note into Hatchbook when you are done (it is an example, not a link):',
+      '',
+      '```markdown',
+      'Checked against [the old slip](forms/loan-slip-v1.md) and [[Paper Loan Cards]].',
+      '<a href="../../nowhere.md">legacy form</a> https://old.brackenridge-tools.example/slips',
+      '```',
+      '',
+    ];
   }
   if (h === 'First five minutes') {
-    return ['```sh', 'curl -s https://status.hatchbook.example/api/v1/health | jq .status', '# then see [runbook](../missing.md)', '```', ''];
+    return [
+      '```sh',
+      'curl -s https://status.hatchbook.example/api/v1/health | jq .status',
+      '# then see [runbook](../missing.md)',
+      '```',
+      '',
+    ];
   }
   if (h === 'The rules' || h === 'At a glance') {
-    return ['| Item | Rule | Since |', '| --- | --- | --- |', `| Loans | Two weeks, one renewal | 2021 |`,
-      `| Deposits | Sliding scale, see desk | 2022 |`, `| Kit bundles | Hosts only | 2024 |`, ''];
+    return [
+      '| Item | Rule | Since |',
+      '| --- | --- | --- |',
+      `| Loans | Two weeks, one renewal | 2021 |`,
+      `| Deposits | Sliding scale, see desk | 2022 |`,
+      `| Kit bundles | Hosts only | 2024 |`,
+      '',
+    ];
   }
   if (h === 'Decisions') return [`- ${fillerSentence(random)}`, `- ${fillerSentence(random)}`, ''];
-  if (h === 'Before you start') return ['Type `[[Van Rota]]` or `[rota](rota.md)` in a Hatchbook note to point at the rota; in this handbook it is plain text.', ''];
+  if (h === 'Before you start')
+    return ['Type `[[Van Rota]]` or `[rota](rota.md)` in a Hatchbook note to point at the rota; in this handbook it is plain text.', ''];
   if (h === 'Purpose' && HTML_IDS[page.path]) return HTML_IDS[page.path]!.map((id) => `<div id="${id}"></div>`).concat('');
   return [];
 }

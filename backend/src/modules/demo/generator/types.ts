@@ -35,14 +35,39 @@ export interface DemoDocSet {
 
 /** How a link is written in Markdown. */
 export type LinkForm =
-  | 'relative' | 'root-absolute' | 'site-url' | 'site-autolink' | 'wiki' | 'wiki-label' | 'wiki-heading'
-  | 'wiki-title' | 'embed' | 'reference-full' | 'reference-collapsed' | 'reference-shortcut' | 'html'
-  | 'image' | 'wiki-image' | 'autolink' | 'bare-url' | 'inline-raw' | 'empty';
+  | 'relative'
+  | 'root-absolute'
+  | 'site-url'
+  | 'site-autolink'
+  | 'wiki'
+  | 'wiki-label'
+  | 'wiki-heading'
+  | 'wiki-title'
+  | 'embed'
+  | 'reference-full'
+  | 'reference-collapsed'
+  | 'reference-shortcut'
+  | 'html'
+  | 'image'
+  | 'wiki-image'
+  | 'autolink'
+  | 'bare-url'
+  | 'inline-raw'
+  | 'empty';
 
 /** What the link resolves to under DOMAIN.md, decided by the generator when it plans the link. */
 export type LinkStatus =
-  | 'page' | 'self' | 'asset' | 'broken' | 'broken-anchor' | 'broken-asset' | 'external' | 'unsafe'
-  | 'ambiguous' | 'redirected' | 'out-of-scope';
+  | 'page'
+  | 'self'
+  | 'asset'
+  | 'broken'
+  | 'broken-anchor'
+  | 'broken-asset'
+  | 'external'
+  | 'unsafe'
+  | 'ambiguous'
+  | 'redirected'
+  | 'out-of-scope';
 
 export interface PlannedLink {
   source: string;

@@ -29,8 +29,10 @@ async function refusedWithoutInflating(archive: kit.HostileArchive) {
   try {
     const run = await measure(() => attemptImport(file));
     const attempt = run.result!;
-    figures.push(`check ${archive.check} ${archive.label}: ${attempt.error?.code}, ${(archive.bytes.length / 1024).toFixed(0)} KiB file, ` +
-      `${run.ms.toFixed(1)} ms, rss delta ${run.rssDeltaMb.toFixed(1)} MB, inflated ${probe.bytes} bytes`);
+    figures.push(
+      `check ${archive.check} ${archive.label}: ${attempt.error?.code}, ${(archive.bytes.length / 1024).toFixed(0)} KiB file, ` +
+        `${run.ms.toFixed(1)} ms, rss delta ${run.rssDeltaMb.toFixed(1)} MB, inflated ${probe.bytes} bytes`,
+    );
     expect(attempt.error?.code, archive.label).toBe(archive.code);
     expect(attempt.error?.status).toBe(422);
     expect(probe.inflaters).toBe(0);

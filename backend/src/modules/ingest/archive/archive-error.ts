@@ -66,11 +66,21 @@ const MIB = 1024 * 1024;
  * so a 200,000,000-byte file is "200 MB" next to "the limit is 5 MiB" (the wording of check 16).
  */
 export function formatBytes(bytes: number): string {
-  const binary: Array<[number, string]> = [[1024 * 1024 * MIB, 'TiB'], [1024 * MIB, 'GiB'], [MIB, 'MiB'], [1024, 'KiB']];
+  const binary: Array<[number, string]> = [
+    [1024 * 1024 * MIB, 'TiB'],
+    [1024 * MIB, 'GiB'],
+    [MIB, 'MiB'],
+    [1024, 'KiB'],
+  ];
   for (const [size, unit] of binary) {
     if (bytes >= size && bytes % size === 0) return `${bytes / size} ${unit}`;
   }
-  const units: Array<[number, string]> = [[1e12, 'TB'], [1e9, 'GB'], [1e6, 'MB'], [1e3, 'kB']];
+  const units: Array<[number, string]> = [
+    [1e12, 'TB'],
+    [1e9, 'GB'],
+    [1e6, 'MB'],
+    [1e3, 'kB'],
+  ];
   for (const [size, unit] of units) {
     if (bytes >= size) return `${Number((bytes / size).toFixed(1))} ${unit}`;
   }

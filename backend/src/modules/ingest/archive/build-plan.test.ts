@@ -12,7 +12,16 @@ const options = (overrides: Partial<InspectOptions> = {}): InspectOptions => ({
 });
 
 function record(name: string, extra: Partial<EntryRecord> = {}): EntryRecord {
-  return { label: name, name: { ok: true, name }, isSymlink: false, isEncrypted: false, method: 8, size: 100, compressedSize: 60, ...extra };
+  return {
+    label: name,
+    name: { ok: true, name },
+    isSymlink: false,
+    isEncrypted: false,
+    method: 8,
+    size: 100,
+    compressedSize: 60,
+    ...extra,
+  };
 }
 
 function refusal(records: EntryRecord[], opts = options()): ArchiveError {
@@ -40,7 +49,10 @@ describe('buildPlan', () => {
   });
 
   it('strips one shared top folder, ignoring __MACOSX and hidden root files', () => {
-    const plan = buildPlan([record('book/'), record('book/a.md'), record('book/img/x.png'), record('__MACOSX/book/._a.md'), record('.DS_Store')], options());
+    const plan = buildPlan(
+      [record('book/'), record('book/a.md'), record('book/img/x.png'), record('__MACOSX/book/._a.md'), record('.DS_Store')],
+      options(),
+    );
     expect(plan.topFolderStripped).toBe('book');
     expect(plan.entries.map((e) => e.path)).toEqual(['a.md', 'img/x.png']);
     expect(plan.ignored.map((e) => e.path)).toEqual(['__MACOSX/book/._a.md', '.DS_Store']);
@@ -54,7 +66,9 @@ describe('buildPlan', () => {
   it('applies ignore globs (picomatch) to the stripped path', () => {
     const plan = buildPlan([record('site/a.md'), record('site/drafts/b.md')], options({ ignoreGlobs: ['drafts/**'] }));
     expect(plan.entries.map((e) => e.path)).toEqual(['a.md']);
-    expect(plan.ignored).toEqual([{ path: 'drafts/b.md', size: 100, compressedSize: 60, kind: 'ignored', ignoredReason: 'matches an ignore pattern' }]);
+    expect(plan.ignored).toEqual([
+      { path: 'drafts/b.md', size: 100, compressedSize: 60, kind: 'ignored', ignoredReason: 'matches an ignore pattern' },
+    ]);
   });
 
   it('accepts page extensions with or without the dot, in any case', () => {

@@ -118,10 +118,16 @@ function checkTotals(records: EntryRecord[], limits: ArchiveLimits, violations: 
   }
   const overall = total / Math.max(compressed, 1);
   if (total > limits.ratioMinBytes && overall > limits.maxTotalRatio) {
-    violations.add('ARCHIVE_RATIO_EXCEEDED', `the archive expands ${Math.round(overall)}:1 overall; the limit is ${limits.maxTotalRatio}:1`);
+    violations.add(
+      'ARCHIVE_RATIO_EXCEEDED',
+      `the archive expands ${Math.round(overall)}:1 overall; the limit is ${limits.maxTotalRatio}:1`,
+    );
   }
   if (total > limits.maxTotalBytes) {
-    violations.add('ARCHIVE_UNCOMPRESSED_TOO_LARGE', `the archive unpacks to ${formatBytes(total)}; the limit is ${formatBytes(limits.maxTotalBytes)}`);
+    violations.add(
+      'ARCHIVE_UNCOMPRESSED_TOO_LARGE',
+      `the archive unpacks to ${formatBytes(total)}; the limit is ${formatBytes(limits.maxTotalBytes)}`,
+    );
   }
   return total;
 }

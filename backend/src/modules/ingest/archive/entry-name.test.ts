@@ -8,7 +8,13 @@ describe('decodeEntryName', () => {
   it('decodes bit-11-clear names as IBM code page 437', () => {
     // Unicode Consortium, VENDORS/MICSFT/PC/CP437.TXT (values from memory): 0x80 U+00C7, 0x81 U+00FC,
     // 0x9B U+00A2, 0xE1 U+00DF, 0xFF U+00A0.
-    const cases: Array<[number, string]> = [[0x80, '\u00c7'], [0x81, '\u00fc'], [0x9b, '\u00a2'], [0xe1, '\u00df'], [0xff, '\u00a0']];
+    const cases: Array<[number, string]> = [
+      [0x80, '\u00c7'],
+      [0x81, '\u00fc'],
+      [0x9b, '\u00a2'],
+      [0xe1, '\u00df'],
+      [0xff, '\u00a0'],
+    ];
     for (const [byte, expected] of cases) {
       expect(decodeEntryName(Buffer.from([0x61, byte]), 0)).toEqual({ ok: true, name: `a${expected}` });
     }
@@ -33,7 +39,17 @@ describe('decodeEntryName', () => {
 
 describe('normaliseEntryPath', () => {
   it('refuses every zip slip form (Snyk "Zip Slip" 2018; OWASP File Upload Cheat Sheet)', () => {
-    const unsafe = ['../x.md', '../../outside/escape.md', '/abs.md', 'C:/x.md', 'c:x.md', 'a\\..\\..\\x.md', 'a/./../../x.md', '\\\\server\\share\\x.md', 'a/b/..'];
+    const unsafe = [
+      '../x.md',
+      '../../outside/escape.md',
+      '/abs.md',
+      'C:/x.md',
+      'c:x.md',
+      'a\\..\\..\\x.md',
+      'a/./../../x.md',
+      '\\\\server\\share\\x.md',
+      'a/b/..',
+    ];
     for (const name of unsafe) expect(normaliseEntryPath(name).ok, name).toBe(false);
   });
 

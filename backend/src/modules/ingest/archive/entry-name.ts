@@ -39,9 +39,7 @@ export function checkText(name: string): DecodedName {
   return { ok: true, name };
 }
 
-export type NormalisedPath =
-  | { ok: true; segments: string[]; isDirectory: boolean }
-  | { ok: false; problem: string };
+export type NormalisedPath = { ok: true; segments: string[]; isDirectory: boolean } | { ok: false; problem: string };
 
 /**
  * Backslashes are read as separators (old Windows tools write them), then any absolute form, drive letter
@@ -71,6 +69,8 @@ export function nameLabel(name: DecodedName, raw: Buffer): string {
 
 /** As above for decoded names: shows bidi and control characters as escapes so the detail cannot mislead. */
 export function describeName(name: string): string {
-  return name.replace(/[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/gu, (c) =>
-    `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  return name.replace(
+    /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/gu,
+    (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`,
+  );
 }

@@ -28,7 +28,10 @@ async function readAll(plan: Awaited<ReturnType<typeof inspectFolder>>): Promise
 }
 
 async function codeOf(run: () => Promise<unknown>): Promise<ArchiveError> {
-  const error = await run().then(() => undefined, (caught: unknown) => caught);
+  const error = await run().then(
+    () => undefined,
+    (caught: unknown) => caught,
+  );
   expect(error).toBeInstanceOf(ArchiveError);
   return error as ArchiveError;
 }
@@ -38,9 +41,18 @@ describe('inspectFolder / readFolderPages', () => {
     await writeFile(join(root, 'site', 'cafe\u0301.md'), '# Caf\u00e9\n');
     const plan = await inspectFolder(root, options);
     expect(plan.topFolderStripped).toBe('site');
-    expect(plan.entries.map((e) => [e.path, e.kind]).sort()).toEqual([['caf\u00e9.md', 'page'], ['docs/guide.md', 'page'], ['index.md', 'page'], ['logo.png', 'asset']]);
+    expect(plan.entries.map((e) => [e.path, e.kind]).sort()).toEqual([
+      ['caf\u00e9.md', 'page'],
+      ['docs/guide.md', 'page'],
+      ['index.md', 'page'],
+      ['logo.png', 'asset'],
+    ]);
     const pages = await readAll(plan);
-    expect(pages.map((p) => [p.path, p.bytes.toString()]).sort()).toEqual([['caf\u00e9.md', '# Caf\u00e9\n'], ['docs/guide.md', '# Guide\n'], ['index.md', '# Home\n']]);
+    expect(pages.map((p) => [p.path, p.bytes.toString()]).sort()).toEqual([
+      ['caf\u00e9.md', '# Caf\u00e9\n'],
+      ['docs/guide.md', '# Guide\n'],
+      ['index.md', '# Home\n'],
+    ]);
   });
 
   it('refuses symbolic links, inside or pointing outside', async () => {

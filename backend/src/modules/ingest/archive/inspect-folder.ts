@@ -13,7 +13,10 @@ import { walkedPlanPath, walkFolder, type WalkedFile } from './folder-walk.js';
 
 export async function inspectFolder(root: string, options: InspectOptions): Promise<ArchivePlan> {
   const files = await walkFolder(root, options.limits);
-  return buildPlan(files.map((file) => file.record), options);
+  return buildPlan(
+    files.map((file) => file.record),
+    options,
+  );
 }
 
 export async function* readFolderPages(

@@ -23,15 +23,26 @@ const guide = '# Guide\n\nSee [home](../index.md) and ![logo](img/logo.png).\n'.
 
 describe('reading accepted archives', () => {
   it('returns page bytes unchanged, opens pages only, and the probes see real inflation', async () => {
-    const bytes = await wellFormedZip({ 'site/index.md': '# Home\n', 'site/docs/guide.md': guide, 'site/img/logo.png': Buffer.alloc(2048, 3) });
+    const bytes = await wellFormedZip({
+      'site/index.md': '# Home\n',
+      'site/docs/guide.md': guide,
+      'site/img/logo.png': Buffer.alloc(2048, 3),
+    });
     const openReadStream = vi.spyOn(yauzl.ZipFile.prototype, 'openReadStream');
     const probe = probeInflation();
     try {
       const attempt = await attemptImport(await temp.write('ok.zip', bytes));
       expect(attempt.error).toBeUndefined();
       expect(attempt.plan?.topFolderStripped).toBe('site');
-      expect(attempt.plan?.entries.map((e) => [e.path, e.kind])).toEqual([['index.md', 'page'], ['docs/guide.md', 'page'], ['img/logo.png', 'asset']]);
-      expect(attempt.pages.map((p) => [p.path, p.bytes.toString('utf8')])).toEqual([['index.md', '# Home\n'], ['docs/guide.md', guide]]);
+      expect(attempt.plan?.entries.map((e) => [e.path, e.kind])).toEqual([
+        ['index.md', 'page'],
+        ['docs/guide.md', 'page'],
+        ['img/logo.png', 'asset'],
+      ]);
+      expect(attempt.pages.map((p) => [p.path, p.bytes.toString('utf8')])).toEqual([
+        ['index.md', '# Home\n'],
+        ['docs/guide.md', guide],
+      ]);
       // Positive control for the bomb tests: these counters do move when something is inflated.
       expect(openReadStream).toHaveBeenCalledTimes(2);
       expect(probe.inflaters).toBe(2);
@@ -73,7 +84,10 @@ describe('reading accepted archives', () => {
       const attempt = await attemptImport(await temp.write('mixed.zip', (await kit.mixedContent()).bytes));
       expect(attempt.pages.map((p) => p.path)).toEqual(['index.md']);
       expect(openReadStream).toHaveBeenCalledTimes(1);
-      expect(attempt.plan?.entries.map((e) => [e.path, e.kind])).toEqual([['index.md', 'page'], ['img/logo.png', 'asset']]);
+      expect(attempt.plan?.entries.map((e) => [e.path, e.kind])).toEqual([
+        ['index.md', 'page'],
+        ['img/logo.png', 'asset'],
+      ]);
       expect(attempt.plan?.ignored.map((e) => [e.path, e.ignoredReason])).toEqual([
         ['inner.zip', 'nested archive (not opened)'],
         ['tools/setup.exe', 'executable (not run)'],

@@ -31,8 +31,7 @@ export interface PageWarning {
 }
 
 export type ParseOutcome =
-  | { path: string; ok: true; facts: StoredFacts; text: string; rawLinks: RawLink[] }
-  | { path: string; ok: false; warning: PageWarning };
+  { path: string; ok: true; facts: StoredFacts; text: string; rawLinks: RawLink[] } | { path: string; ok: false; warning: PageWarning };
 
 const UTF16_BOMS = [
   [0xff, 0xfe],

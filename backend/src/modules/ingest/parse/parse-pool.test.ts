@@ -27,7 +27,11 @@ describe('parse pool', () => {
       // 50,000 headings take seconds in remark on this machine, far past 400 ms; the small pages take milliseconds.
       const slow = page('slow.md', Array.from({ length: 50_000 }, (_, i) => `## Heading ${i}`).join('\n\n'));
       const outcomes = await pool.parse([page('a.md', '# A\n'), slow, page('b.md', '# B\n')], options);
-      expect(outcomes.map((o) => [o.path, o.ok ? 'ok' : o.warning.code])).toEqual([['a.md', 'ok'], ['slow.md', 'PARSE_TIMEOUT'], ['b.md', 'ok']]);
+      expect(outcomes.map((o) => [o.path, o.ok ? 'ok' : o.warning.code])).toEqual([
+        ['a.md', 'ok'],
+        ['slow.md', 'PARSE_TIMEOUT'],
+        ['b.md', 'ok'],
+      ]);
       const again = await pool.parse([page('c.md', '# C\n')], options);
       expect(again[0]).toMatchObject({ ok: true, facts: { title: 'C' } });
       expect(pool.failed).toBe(false);

@@ -17,7 +17,10 @@ export interface ParsePoolOptions {
 }
 
 export class ParsePoolError extends Error {
-  constructor(readonly code: 'PARSE_RESOURCE', message: string) {
+  constructor(
+    readonly code: 'PARSE_RESOURCE',
+    message: string,
+  ) {
     super(message);
   }
 }
@@ -100,7 +103,8 @@ class ParsePool implements PageParser {
     worker.on('message', (result: BatchResult) => this.finish(slot, result));
     worker.on('error', (error) => this.fail(new ParsePoolError('PARSE_RESOURCE', `A parser thread stopped: ${error.message}`)));
     worker.on('exit', () => {
-      if (!this.closed && this.slots.includes(slot)) this.fail(new ParsePoolError('PARSE_RESOURCE', 'A parser thread exited unexpectedly.'));
+      if (!this.closed && this.slots.includes(slot))
+        this.fail(new ParsePoolError('PARSE_RESOURCE', 'A parser thread exited unexpectedly.'));
     });
     return slot;
   }

@@ -28,7 +28,10 @@ export class SnapshotsRepository {
   /** Null when another import of the doc set is still running (the partial unique index decides). */
   async insertReceived(values: NewSnapshot): Promise<SnapshotRow | null> {
     try {
-      const [row] = await this.database.db.insert(snapshots).values({ ...values, status: 'received' }).returning();
+      const [row] = await this.database.db
+        .insert(snapshots)
+        .values({ ...values, status: 'received' })
+        .returning();
       return row;
     } catch (error) {
       if (isUniqueViolation(error)) return null;
@@ -37,7 +40,10 @@ export class SnapshotsRepository {
   }
 
   async markImporting(id: string, total: number): Promise<void> {
-    await this.database.db.update(snapshots).set({ status: 'importing', progressTotal: total, progressDone: 0 }).where(eq(snapshots.id, id));
+    await this.database.db
+      .update(snapshots)
+      .set({ status: 'importing', progressTotal: total, progressDone: 0 })
+      .where(eq(snapshots.id, id));
   }
 
   async progress(id: string, done: number): Promise<void> {
@@ -62,7 +68,10 @@ export class SnapshotsRepository {
   }
 
   async findUnfinished(): Promise<Pick<SnapshotRow, 'id' | 'docSetId'>[]> {
-    return this.database.db.select({ id: snapshots.id, docSetId: snapshots.docSetId }).from(snapshots).where(inArray(snapshots.status, [...IMPORTING]));
+    return this.database.db
+      .select({ id: snapshots.id, docSetId: snapshots.docSetId })
+      .from(snapshots)
+      .where(inArray(snapshots.status, [...IMPORTING]));
   }
 
   async list(docSetId: string, offset: number, limit: number): Promise<{ rows: SnapshotRow[]; total: number }> {
@@ -78,7 +87,11 @@ export class SnapshotsRepository {
   }
 
   async find(docSetId: string, id: string): Promise<SnapshotRow | null> {
-    const [row] = await this.database.db.select().from(snapshots).where(and(eq(snapshots.docSetId, docSetId), eq(snapshots.id, id))).limit(1);
+    const [row] = await this.database.db
+      .select()
+      .from(snapshots)
+      .where(and(eq(snapshots.docSetId, docSetId), eq(snapshots.id, id)))
+      .limit(1);
     return row ?? null;
   }
 

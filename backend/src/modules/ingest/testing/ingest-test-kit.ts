@@ -41,7 +41,10 @@ export async function importKit(t: TestApp, docSetId: string, role: 'editor' | '
     docSetId,
     token,
     upload: (bytes, fileName = 'docs.zip') =>
-      auth(t.http.post(`/api/doc-sets/${docSetId}/snapshots`)).attach('archive', bytes, { filename: fileName, contentType: 'application/zip' }),
+      auth(t.http.post(`/api/doc-sets/${docSetId}/snapshots`)).attach('archive', bytes, {
+        filename: fileName,
+        contentType: 'application/zip',
+      }),
     async waitFor(snapshotId, timeoutMs = 60_000) {
       const until = Date.now() + timeoutMs;
       for (;;) {
@@ -64,7 +67,9 @@ export async function importKit(t: TestApp, docSetId: string, role: 'editor' | '
       const db = t.app.get(DbService).db;
       const orphans = (await db.execute(sql`
         SELECT (SELECT count(*) FROM pages p JOIN snapshots s ON s.id = p.snapshot_id WHERE s.status <> 'ready')
-             + (SELECT count(*) FROM links l JOIN snapshots s ON s.id = l.snapshot_id WHERE s.status <> 'ready') AS n`)) as unknown as { rows: { n: string }[] };
+             + (SELECT count(*) FROM links l JOIN snapshots s ON s.id = l.snapshot_id WHERE s.status <> 'ready') AS n`)) as unknown as {
+        rows: { n: string }[];
+      };
       return {
         snapshotIds: items.map((s) => s.id).sort(),
         unfinished: items.filter((s) => s.status === 'received' || s.status === 'importing').length,
@@ -75,7 +80,11 @@ export async function importKit(t: TestApp, docSetId: string, role: 'editor' | '
     },
     rows: (snapshotId) => t.app.get(PageStoreRepository).rowCounts(snapshotId),
     async pagePaths(snapshotId) {
-      const result = (await t.app.get(DbService).db.execute(sql`SELECT path FROM pages WHERE snapshot_id = ${snapshotId}::uuid ORDER BY path`)) as unknown as { rows: { path: string }[] };
+      const result = (await t.app
+        .get(DbService)
+        .db.execute(sql`SELECT path FROM pages WHERE snapshot_id = ${snapshotId}::uuid ORDER BY path`)) as unknown as {
+        rows: { path: string }[];
+      };
       return result.rows.map((row) => row.path).sort();
     },
   };

@@ -18,7 +18,11 @@ export interface StoredUpload {
 
 export function hashingDiskStorage(dir: string): multer.StorageEngine {
   return {
-    _handleFile(_request: Request, file: Express.Multer.File, done: (error?: unknown, info?: Partial<Express.Multer.File> & StoredUpload) => void) {
+    _handleFile(
+      _request: Request,
+      file: Express.Multer.File,
+      done: (error?: unknown, info?: Partial<Express.Multer.File> & StoredUpload) => void,
+    ) {
       mkdirSync(dir, { recursive: true, mode: 0o700 });
       const path = join(dir, `${randomBytes(16).toString('hex')}.upload`);
       const hash = createHash('sha256');

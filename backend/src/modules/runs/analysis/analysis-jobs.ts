@@ -89,7 +89,8 @@ export function runAnalyzeJob(job: AnalyzeJob): AnalyzeJobResult {
     result.inbound[i] = p.inboundCount;
     result.outbound[i] = p.outboundCount;
     result.depth[i] = p.depth ?? -1;
-    result.flags[i] = (p.reachable ? FLAG_REACHABLE : 0) | (p.orphan ? FLAG_ORPHAN : 0) | (p.deadEnd ? FLAG_DEAD_END : 0) | (p.deep ? FLAG_DEEP : 0);
+    result.flags[i] =
+      (p.reachable ? FLAG_REACHABLE : 0) | (p.orphan ? FLAG_ORPHAN : 0) | (p.deadEnd ? FLAG_DEAD_END : 0) | (p.deep ? FLAG_DEEP : 0);
     result.islandId[i] = p.islandId ?? 0;
   });
   return result;

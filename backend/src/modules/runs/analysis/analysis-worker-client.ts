@@ -50,7 +50,11 @@ function startWorker(workerData: AnalysisJob, transferList: ArrayBuffer[]): Work
   const compiled = new URL('./analysis-worker.js', import.meta.url);
   if (existsSync(fileURLToPath(compiled))) return new Worker(compiled, { workerData, transferList });
   const entry = new URL('./analysis-worker.ts', import.meta.url).href;
-  const tsxApi = pathToFileURL(createRequire(import.meta.url).resolve('tsx/esm/api').replace(/\.cjs$/, '.mjs')).href;
+  const tsxApi = pathToFileURL(
+    createRequire(import.meta.url)
+      .resolve('tsx/esm/api')
+      .replace(/\.cjs$/, '.mjs'),
+  ).href;
   const bootstrap = `import { tsImport } from ${JSON.stringify(tsxApi)}; await tsImport(${JSON.stringify(entry)}, ${JSON.stringify(entry)});`;
   return new Worker(new URL(`data:text/javascript,${encodeURIComponent(bootstrap)}`), { workerData, transferList });
 }

@@ -7,5 +7,6 @@ import { runAnalyzeJob, runGainsJob, type AnalyzeJob, type GainsJob } from './an
 
 const job = workerData as AnalyzeJob | GainsJob;
 const result = job.kind === 'analyze' ? runAnalyzeJob(job) : runGainsJob(job);
-const transfer = job.kind === 'analyze' ? Object.values(result).flatMap((v) => (ArrayBuffer.isView(v) ? [v.buffer as ArrayBuffer] : [])) : [];
+const transfer =
+  job.kind === 'analyze' ? Object.values(result).flatMap((v) => (ArrayBuffer.isView(v) ? [v.buffer as ArrayBuffer] : [])) : [];
 parentPort!.postMessage(result, transfer);

@@ -12,7 +12,10 @@ describe('chooseEntryPages', () => {
 
   // DOMAIN.md "Metrics": the default entry page is the root index page (first of indexFileNames present).
   it('falls back to the first root index file, never to one in a folder', () => {
-    expect(chooseEntryPages(new Set(['guide/index.md', 'README.md', '_index.md']), [], INDEX_NAMES)).toEqual({ paths: ['README.md'], warnings: [] });
+    expect(chooseEntryPages(new Set(['guide/index.md', 'README.md', '_index.md']), [], INDEX_NAMES)).toEqual({
+      paths: ['README.md'],
+      warnings: [],
+    });
     const none = chooseEntryPages(new Set(['guide/index.md']), [], INDEX_NAMES);
     expect(none.paths).toEqual([]);
     expect(none.warnings[0].code).toBe('NO_ENTRY_PAGE');

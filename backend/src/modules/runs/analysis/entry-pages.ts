@@ -15,13 +15,20 @@ export interface EntryPageChoice {
   warnings: RunWarning[];
 }
 
-export function chooseEntryPages(pagePaths: ReadonlySet<string>, entryPages: readonly string[], indexFileNames: readonly string[]): EntryPageChoice {
+export function chooseEntryPages(
+  pagePaths: ReadonlySet<string>,
+  entryPages: readonly string[],
+  indexFileNames: readonly string[],
+): EntryPageChoice {
   const warnings: RunWarning[] = [];
   if (entryPages.length > 0) {
     const found = entryPages.map(normalisePath).filter((p) => pagePaths.has(p));
     const missing = entryPages.filter((p) => !pagePaths.has(normalisePath(p)));
     if (missing.length > 0) {
-      warnings.push({ code: 'ENTRY_PAGE_MISSING', message: `These entry pages are not in the snapshot: ${missing.slice(0, 10).join(', ')}.` });
+      warnings.push({
+        code: 'ENTRY_PAGE_MISSING',
+        message: `These entry pages are not in the snapshot: ${missing.slice(0, 10).join(', ')}.`,
+      });
     }
     if (found.length > 0) return { paths: [...new Set(found)], warnings };
   }

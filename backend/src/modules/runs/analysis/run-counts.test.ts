@@ -16,6 +16,17 @@ describe('runCounts', () => {
       ],
       { orphans: 1, deadEnds: 2, unreachable: 0, deepPages: 0, islands: 0, sccCount: 4 },
     );
-    expect(counts).toMatchObject({ pages: 4, links: 24, internalLinks: 16, externalLinks: 5, brokenLinks: 3, brokenAssets: 1, unsafeLinks: 1, outOfScopeLinks: 2, orphans: 1, deadEnds: 2 });
+    expect(counts).toMatchObject({
+      pages: 4,
+      links: 24,
+      internalLinks: 16,
+      externalLinks: 5,
+      brokenLinks: 3,
+      brokenAssets: 1,
+      unsafeLinks: 1,
+      outOfScopeLinks: 2,
+      orphans: 1,
+      deadEnds: 2,
+    });
   });
 });

@@ -19,6 +19,8 @@ describe('csv', () => {
   it('builds a Content-Disposition that quotes, CR/LF and non-ASCII cannot break', () => {
     const header = attachmentDisposition('Guide "β"\r\nSet-Cookie: x=1.csv');
     expect(header).not.toMatch(/[\r\n]/);
-    expect(header).toBe(`attachment; filename="Guide_Set-Cookie_x_1.csv"; filename*=UTF-8''Guide%20%22%CE%B2%22%0D%0ASet-Cookie%3A%20x%3D1.csv`);
+    expect(header).toBe(
+      `attachment; filename="Guide_Set-Cookie_x_1.csv"; filename*=UTF-8''Guide%20%22%CE%B2%22%0D%0ASet-Cookie%3A%20x%3D1.csv`,
+    );
   });
 });

@@ -20,7 +20,12 @@ export class ExportRepository {
     return rows.map(toPageItem);
   }
 
-  async linksAfterId(snapshotId: string, statuses: readonly string[] | null, afterId: number, limit: number): Promise<(LinkRowView & { id: number })[]> {
+  async linksAfterId(
+    snapshotId: string,
+    statuses: readonly string[] | null,
+    afterId: number,
+    limit: number,
+  ): Promise<(LinkRowView & { id: number })[]> {
     const statusFilter = statuses ? sql`and l.status = any(${pgArray(statuses)}::text[])` : sql``;
     const rows = await queryRows<LinkRowView & { id: unknown }>(
       this.database.db,

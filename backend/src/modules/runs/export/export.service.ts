@@ -17,7 +17,23 @@ const PAGE_VIEWS: Partial<Record<ExportView, string>> = {
   deep: 'deep',
   islands: 'island_id is not null',
 };
-const PAGE_COLUMNS = ['path', 'title', 'stationaryScore', 'timesAverage', 'rank', 'inboundCount', 'outboundCount', 'depth', 'reachable', 'orphan', 'deadEnd', 'deep', 'island', 'brokenLinkCount', 'wordCount'] as const;
+const PAGE_COLUMNS = [
+  'path',
+  'title',
+  'stationaryScore',
+  'timesAverage',
+  'rank',
+  'inboundCount',
+  'outboundCount',
+  'depth',
+  'reachable',
+  'orphan',
+  'deadEnd',
+  'deep',
+  'island',
+  'brokenLinkCount',
+  'wordCount',
+] as const;
 const LINK_COLUMNS = ['sourcePath', 'line', 'column', 'hrefText', 'targetPath', 'anchor', 'kind', 'status', 'reason'] as const;
 
 /** Streams the rows of a view as CSV, chunk by chunk, so a 100,000-row export never sits in memory. */
@@ -33,7 +49,7 @@ export class ExportService {
 
   private async writePages(run: RunRow, condition: string, filters: PageFilters, sink: (chunk: string) => Promise<void>): Promise<void> {
     await sink(csvLine(PAGE_COLUMNS));
-    for (let after = 0; ; ) {
+    for (let after = 0; ;) {
       const rows = await this.repository.pagesAfterRank(run.id, condition, filters, after, CHUNK);
       if (rows.length === 0) return;
       await sink(rows.map((row) => csvLine(PAGE_COLUMNS.map((c) => row[c]))).join(''));
@@ -43,7 +59,7 @@ export class ExportService {
 
   private async writeLinks(run: RunRow, statuses: string[] | null, sink: (chunk: string) => Promise<void>): Promise<void> {
     await sink(csvLine(LINK_COLUMNS));
-    for (let after = 0; ; ) {
+    for (let after = 0; ;) {
       const rows = await this.repository.linksAfterId(run.snapshotId, statuses, after, CHUNK);
       if (rows.length === 0) return;
       // The raw href is written as text (hrefText); a CSV cell is never a clickable link.

@@ -17,7 +17,12 @@ export const PAGE_FINDINGS = {
 } as const;
 
 /** Link findings compared by source page path + raw href. */
-export const LINK_FINDINGS = { brokenLinks: 'broken', brokenAnchors: 'broken-anchor', unsafeLinks: 'unsafe', ambiguousLinks: 'ambiguous' } as const;
+export const LINK_FINDINGS = {
+  brokenLinks: 'broken',
+  brokenAnchors: 'broken-anchor',
+  unsafeLinks: 'unsafe',
+  ambiguousLinks: 'ambiguous',
+} as const;
 
 export interface ChangeList<T> {
   total: number;
@@ -54,7 +59,10 @@ export class DiffRepository {
   }
 
   private async listed<T>(query: SQL): Promise<ChangeList<T>> {
-    const rows = await queryRows<T & { total: unknown }>(this.database.db, sql`select x.*, count(*) over () as total from (${query}) x order by 1, 2 limit ${DIFF_LIST_LIMIT}`);
+    const rows = await queryRows<T & { total: unknown }>(
+      this.database.db,
+      sql`select x.*, count(*) over () as total from (${query}) x order by 1, 2 limit ${DIFF_LIST_LIMIT}`,
+    );
     return { total: rows.length > 0 ? Number(rows[0].total) : 0, items: rows.map(({ total: _total, ...item }) => item as unknown as T) };
   }
 }

@@ -27,7 +27,12 @@ export class FindingsRepository {
   }
 
   /** Links in source-page then line order (the links_snapshot_source_idx order). */
-  async links(snapshotId: string, filter: { status?: string; source?: string }, offset: number, limit: number): Promise<{ rows: LinkRowView[]; total: number }> {
+  async links(
+    snapshotId: string,
+    filter: { status?: string; source?: string },
+    offset: number,
+    limit: number,
+  ): Promise<{ rows: LinkRowView[]; total: number }> {
     const where = linkWhere(snapshotId, filter);
     const rows = await queryRows<LinkRowView>(
       this.db,
@@ -35,7 +40,10 @@ export class FindingsRepository {
           from links l join pages p on p.id = l.source_page_id where ${where}
           order by l.source_page_id, l.line, l."column", l.id limit ${limit} offset ${offset}`,
     );
-    const [{ n }] = await queryRows<{ n: unknown }>(this.db, sql`select count(*) as n from links l join pages p on p.id = l.source_page_id where ${where}`);
+    const [{ n }] = await queryRows<{ n: unknown }>(
+      this.db,
+      sql`select count(*) as n from links l join pages p on p.id = l.source_page_id where ${where}`,
+    );
     return { rows, total: Number(n) };
   }
 
@@ -52,7 +60,10 @@ export class FindingsRepository {
       this.db,
       sql`select count(distinct coalesce(l.target_path, l.href)) as n from links l join pages p on p.id = l.source_page_id where ${where}`,
     );
-    return { rows: rows.map((r) => ({ targetPath: r.targetPath, linkCount: Number(r.linkCount), sourcePageCount: Number(r.sourcePageCount) })), total: Number(n) };
+    return {
+      rows: rows.map((r) => ({ targetPath: r.targetPath, linkCount: Number(r.linkCount), sourcePageCount: Number(r.sourcePageCount) })),
+      total: Number(n),
+    };
   }
 
   async islands(runId: string, offset: number, limit: number, pagesPerIsland = 200) {
@@ -63,14 +74,24 @@ export class FindingsRepository {
           from page_metrics where run_id = ${runId} and island_id is not null
           group by island_id order by island_id limit ${limit} offset ${offset}`,
     );
-    const [{ n }] = await queryRows<{ n: unknown }>(this.db, sql`select count(distinct island_id) as n from page_metrics where run_id = ${runId} and island_id is not null`);
-    const items = rows.map((r) => ({ islandId: r.islandId, pageCount: Number(r.pageCount), pages: (JSON.parse(String(r.pages)) as unknown[]).slice(0, pagesPerIsland) }));
+    const [{ n }] = await queryRows<{ n: unknown }>(
+      this.db,
+      sql`select count(distinct island_id) as n from page_metrics where run_id = ${runId} and island_id is not null`,
+    );
+    const items = rows.map((r) => ({
+      islandId: r.islandId,
+      pageCount: Number(r.pageCount),
+      pages: (JSON.parse(String(r.pages)) as unknown[]).slice(0, pagesPerIsland),
+    }));
     return { items, total: Number(n) };
   }
 
   /** Share of the total score per tenth of the ranking, and held by the top 1 / 10 / 50 % of pages. */
   async scoreDistribution(runId: string) {
-    const [totals] = await queryRows<{ n: unknown; total: number | null }>(this.db, sql`select count(*) as n, sum(stationary_score) as total from page_metrics where run_id = ${runId}`);
+    const [totals] = await queryRows<{ n: unknown; total: number | null }>(
+      this.db,
+      sql`select count(*) as n, sum(stationary_score) as total from page_metrics where run_id = ${runId}`,
+    );
     const n = Number(totals.n);
     const total = totals.total ?? 0;
     if (n === 0 || total <= 0) return { buckets: [], topShares: { top1: 0, top10: 0, top50: 0 } };

@@ -37,7 +37,10 @@ export class FindingsService {
   async diff(run: RunRow, against: RunRow) {
     const kinds: Record<string, unknown> = {};
     for (const [kind, flag] of Object.entries(PAGE_FINDINGS)) {
-      kinds[kind] = { appeared: await this.diffs.pagesOnlyIn(run.id, against.id, flag), disappeared: await this.diffs.pagesOnlyIn(against.id, run.id, flag) };
+      kinds[kind] = {
+        appeared: await this.diffs.pagesOnlyIn(run.id, against.id, flag),
+        disappeared: await this.diffs.pagesOnlyIn(against.id, run.id, flag),
+      };
     }
     for (const [kind, status] of Object.entries(LINK_FINDINGS)) {
       kinds[kind] = {

@@ -6,7 +6,11 @@
 export const NEIGHBOURHOOD_NODES = 150;
 
 /** Steps from the centre following links either way, for the pages within two steps. */
-export function distancesFrom(centre: number, firstStep: readonly [number, number][], secondStep: readonly [number, number][]): Map<number, number> {
+export function distancesFrom(
+  centre: number,
+  firstStep: readonly [number, number][],
+  secondStep: readonly [number, number][],
+): Map<number, number> {
   const distance = new Map<number, number>([[centre, 0]]);
   for (const [s, t] of firstStep) for (const node of [s, t]) if (!distance.has(node)) distance.set(node, 1);
   for (const [s, t] of secondStep) {

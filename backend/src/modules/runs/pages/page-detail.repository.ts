@@ -23,7 +23,10 @@ export class PageDetailRepository {
   }
 
   async item(runId: string, path: string): Promise<PageItem | null> {
-    const rows = await queryRows<PageItem>(this.db, sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where run_id = ${runId} and path = ${path}`);
+    const rows = await queryRows<PageItem>(
+      this.db,
+      sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where run_id = ${runId} and path = ${path}`,
+    );
     return rows[0] ? toPageItem(rows[0]) : null;
   }
 
@@ -64,7 +67,15 @@ export class PageDetailRepository {
   }
 
   async brokenLinks(snapshotId: string, pageId: number) {
-    return queryRows<{ line: number; column: number; href: string; targetPath: string | null; anchor: string | null; status: string; reason: string | null }>(
+    return queryRows<{
+      line: number;
+      column: number;
+      href: string;
+      targetPath: string | null;
+      anchor: string | null;
+      status: string;
+      reason: string | null;
+    }>(
       this.db,
       sql`select line, "column", href, target_path as "targetPath", anchor, status, reason from links
           where snapshot_id = ${snapshotId} and source_page_id = ${pageId} and status in ('broken', 'broken-anchor')
@@ -80,7 +91,11 @@ export class PageDetailRepository {
           from runs r join page_metrics m on m.run_id = r.id and m.path = ${path}
           where r.doc_set_id = ${docSetId} and r.status = 'finished' order by r.finished_at desc limit 100) x order by "finishedMs"`,
     );
-    return rows.map((r) => ({ runId: r.runId, finishedAt: new Date(Number(r.finishedMs)).toISOString(), stationaryScore: r.stationaryScore }));
+    return rows.map((r) => ({
+      runId: r.runId,
+      finishedAt: new Date(Number(r.finishedMs)).toISOString(),
+      stationaryScore: r.stationaryScore,
+    }));
   }
 
   /** Distinct page-to-page edges touching any of the given pages (capped: hubs can have thousands). */

@@ -23,7 +23,10 @@ export class PageDetailService {
     if (!item) throw notFound('A page with this path in the run');
     const facts = await this.repository.facts(item.pageId);
     const frontMatter = (facts.frontMatter ?? {}) as Record<string, unknown>;
-    const names = [item.title, ...(Array.isArray(frontMatter.aliases) ? frontMatter.aliases.filter((a): a is string => typeof a === 'string') : [])];
+    const names = [
+      item.title,
+      ...(Array.isArray(frontMatter.aliases) ? frontMatter.aliases.filter((a): a is string => typeof a === 'string') : []),
+    ];
     const [inbound, outbound, brokenLinks, unlinkedMentions, scoreHistory, neighbourhood] = await Promise.all([
       this.repository.inbound(run.snapshotId, item.pageId),
       this.repository.outbound(run.snapshotId, item.pageId),
@@ -57,13 +60,16 @@ export class PageDetailService {
     const items = await this.repository.items(run.id, [...distance.keys()]);
     const byId = new Map(items.map((i) => [i.pageId, i]));
     const kept = keepTopNodes(item.pageId, new Map(items.map((i) => [i.pageId, i.stationaryScore])));
-    const nodes = [...kept].map((id) => byId.get(id)!).filter(Boolean).map((n) => ({
-      path: n.path,
-      title: n.title,
-      stationaryScore: n.stationaryScore,
-      flags: flagsOf(n),
-      distance: distance.get(n.pageId)!,
-    }));
+    const nodes = [...kept]
+      .map((id) => byId.get(id)!)
+      .filter(Boolean)
+      .map((n) => ({
+        path: n.path,
+        title: n.title,
+        stationaryScore: n.stationaryScore,
+        flags: flagsOf(n),
+        distance: distance.get(n.pageId)!,
+      }));
     const seen = new Set<string>();
     const edges = [...first, ...second]
       .filter(([s, t]) => kept.has(s) && kept.has(t) && !seen.has(`${s}>${t}`) && seen.add(`${s}>${t}`))

@@ -17,13 +17,21 @@ export class PageListRepository {
 
   constructor(private readonly database: DbService) {}
 
-  async list(runId: string, query: Omit<PageListQuery, 'page' | 'pageSize'>, offset: number, limit: number): Promise<{ rows: PageItem[]; total: number }> {
+  async list(
+    runId: string,
+    query: Omit<PageListQuery, 'page' | 'pageSize'>,
+    offset: number,
+    limit: number,
+  ): Promise<{ rows: PageItem[]; total: number }> {
     const where = whereClause(runId, query);
     const order = orderBy(query.sort);
     const key = JSON.stringify([runId, query.q, query.flags, query.minScore, query.maxScore, query.minDepth, query.maxDepth]);
     const cached = this.totals.get(key);
     if (cached !== undefined) {
-      const rows = await queryRows<PageItem>(this.database.db, sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where ${where} order by ${order} limit ${limit} offset ${offset}`);
+      const rows = await queryRows<PageItem>(
+        this.database.db,
+        sql`select ${sql.raw(PAGE_ITEM_COLUMNS)} from page_metrics where ${where} order by ${order} limit ${limit} offset ${offset}`,
+      );
       return { rows: rows.map(toPageItem), total: cached };
     }
     // First time for this filter: rows and total in one pass over the matches (a text filter cannot use an

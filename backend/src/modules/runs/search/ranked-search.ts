@@ -48,7 +48,10 @@ export function blendRank(matches: readonly Match[]): RankedMatch[] {
 
 export function subgraphRank(matches: readonly Match[], edges: readonly (readonly [number, number])[], damping: number): RankedMatch[] {
   const ids = matches.map((m) => String(m.pageId));
-  const { graph } = buildLinkGraph(ids, edges.map(([s, t]) => [String(s), String(t)] as const));
+  const { graph } = buildLinkGraph(
+    ids,
+    edges.map(([s, t]) => [String(s), String(t)] as const),
+  );
   const { scores } = computeStationaryScore(graph, { damping });
   return matches
     .map((m, i) => {

@@ -15,9 +15,19 @@ export class SearchService {
     const ranked =
       query.mode === 'blend'
         ? blendRank(matches)
-        : subgraphRank(matches, await this.repository.edgesAmong(run.snapshotId, matches.map((m) => m.pageId)), run.settings.damping);
+        : subgraphRank(
+            matches,
+            await this.repository.edgesAmong(
+              run.snapshotId,
+              matches.map((m) => m.pageId),
+            ),
+            run.settings.damping,
+          );
     const shown = ranked.slice((query.page - 1) * query.pageSize, query.page * query.pageSize);
-    const snippets = await this.repository.snippets(shown.map((m) => m.pageId), query.q);
+    const snippets = await this.repository.snippets(
+      shown.map((m) => m.pageId),
+      query.q,
+    );
     const items = shown.map((m) => ({
       path: m.path,
       title: m.title,

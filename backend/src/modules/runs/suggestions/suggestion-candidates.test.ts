@@ -18,7 +18,11 @@ describe('suggestion candidates', () => {
   });
 
   it('keeps positive gains only, largest first', () => {
-    const reasons = new Map([[1, 'same-folder'], [2, 'unlinked-mention'], [3, 'same-folder']] as const);
+    const reasons = new Map([
+      [1, 'same-folder'],
+      [2, 'unlinked-mention'],
+      [3, 'same-folder'],
+    ] as const);
     expect(bestSuggestions([1, 2, 3], [0.002, 0.005, 0], reasons).map((s) => s.source)).toEqual([2, 1]);
   });
 });

@@ -28,7 +28,11 @@ export function folderIndex(paths: readonly string[], scores: ArrayLike<number>)
 }
 
 /** Candidate sources of one target with their reason; a mention wins over a folder neighbour. */
-export function candidateSources(target: number, mentions: readonly number[], folderGroup: readonly number[]): Map<number, SuggestionReason> {
+export function candidateSources(
+  target: number,
+  mentions: readonly number[],
+  folderGroup: readonly number[],
+): Map<number, SuggestionReason> {
   const candidates = new Map<number, SuggestionReason>();
   for (const m of mentions) if (m !== target) candidates.set(m, 'unlinked-mention');
   let added = 0;

@@ -22,10 +22,21 @@ export class SuggestionsRepository {
    * Pages whose text names one of the phrases (title, aliases) but that have no link to the target:
    * `search @@ phraseto_tsquery` uses the GIN index on pages.search, best matches first.
    */
-  async unlinkedMentions(snapshotId: string, targetPageId: number, phrases: readonly string[], limit: number): Promise<{ id: number; path: string; title: string }[]> {
-    const usable = phrases.map((p) => p.trim()).filter((p) => p.length >= 3).slice(0, 10);
+  async unlinkedMentions(
+    snapshotId: string,
+    targetPageId: number,
+    phrases: readonly string[],
+    limit: number,
+  ): Promise<{ id: number; path: string; title: string }[]> {
+    const usable = phrases
+      .map((p) => p.trim())
+      .filter((p) => p.length >= 3)
+      .slice(0, 10);
     if (usable.length === 0) return [];
-    const query = sql.join(usable.map((p) => sql`phraseto_tsquery('english', ${p})`), sql` || `);
+    const query = sql.join(
+      usable.map((p) => sql`phraseto_tsquery('english', ${p})`),
+      sql` || `,
+    );
     const rows = await queryRows<{ id: unknown; path: string; title: string }>(
       this.db,
       sql`select p.id, p.path, p.title from pages p, (select ${query} as q) x
@@ -77,5 +88,9 @@ export async function runScores(database: DbService, runId: string): Promise<{ p
     database.db,
     sql`select page_id, path, stationary_score from page_metrics where run_id = ${runId} order by page_id`,
   );
-  return { pageIds: rows.map((r) => Number(r.page_id)), paths: rows.map((r) => r.path), scores: Float64Array.from(rows, (r) => r.stationary_score) };
+  return {
+    pageIds: rows.map((r) => Number(r.page_id)),
+    paths: rows.map((r) => r.path),
+    scores: Float64Array.from(rows, (r) => r.stationary_score),
+  };
 }

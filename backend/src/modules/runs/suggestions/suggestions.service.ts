@@ -1,6 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { AnalysisWorkerClient } from '../analysis/analysis-worker-client.js';
-import { bestSuggestions, candidateSources, folderIndex, folderOf, MENTION_CANDIDATES, type SuggestionReason } from './suggestion-candidates.js';
+import {
+  bestSuggestions,
+  candidateSources,
+  folderIndex,
+  folderOf,
+  MENTION_CANDIDATES,
+  type SuggestionReason,
+} from './suggestion-candidates.js';
 import { SuggestionsRepository } from './suggestions.repository.js';
 
 /** Targets per worker call: the worker starts once per batch and the stop check runs between batches. */
@@ -38,7 +45,12 @@ export class SuggestionsService {
    * Computes and stores suggestions target by target, in batches, until done, out of time or `stop()`
    * says a newer run or a shutdown wants the thread. Returns how many targets were computed.
    */
-  async compute(context: RunGraphContext, targets: readonly number[], budgetMs: number, stop: () => Promise<boolean> | boolean = () => false): Promise<number> {
+  async compute(
+    context: RunGraphContext,
+    targets: readonly number[],
+    budgetMs: number,
+    stop: () => Promise<boolean> | boolean = () => false,
+  ): Promise<number> {
     const started = performance.now();
     const folders = folderIndex(context.paths, context.scores);
     const position = new Map(context.pageIds.map((id, i) => [id, i]));
@@ -51,13 +63,22 @@ export class SuggestionsService {
     return done;
   }
 
-  private async computeBatch(context: RunGraphContext, targets: readonly number[], folders: Map<string, number[]>, position: Map<number, number>): Promise<void> {
+  private async computeBatch(
+    context: RunGraphContext,
+    targets: readonly number[],
+    folders: Map<string, number[]>,
+    position: Map<number, number>,
+  ): Promise<void> {
     const names = await this.repository.namesOf(targets.map((t) => context.pageIds[t]));
     const asked: { target: number; sources: number[]; reasons: Map<number, SuggestionReason> }[] = [];
     for (const target of targets) {
       const phrases = names.get(context.pageIds[target]) ?? [];
       const mentions = await this.repository.unlinkedMentions(context.snapshotId, context.pageIds[target], phrases, MENTION_CANDIDATES);
-      const reasons = candidateSources(target, mentions.flatMap((m) => (position.has(m.id) ? [position.get(m.id)!] : [])), folders.get(folderOf(context.paths[target])) ?? []);
+      const reasons = candidateSources(
+        target,
+        mentions.flatMap((m) => (position.has(m.id) ? [position.get(m.id)!] : [])),
+        folders.get(folderOf(context.paths[target])) ?? [],
+      );
       asked.push({ target, sources: [...reasons.keys()], reasons });
     }
     const { gains } = await this.worker.gains({
@@ -73,7 +94,11 @@ export class SuggestionsService {
     for (let k = 0; k < gains.length; k++) {
       const { target, sources, reasons } = asked[k];
       const best = bestSuggestions(sources, gains[k], reasons);
-      await this.repository.store(context.runId, context.pageIds[target], best.map((s) => ({ sourcePageId: context.pageIds[s.source], scoreGain: s.gain, reason: s.reason })));
+      await this.repository.store(
+        context.runId,
+        context.pageIds[target],
+        best.map((s) => ({ sourcePageId: context.pageIds[s.source], scoreGain: s.gain, reason: s.reason })),
+      );
     }
   }
 }

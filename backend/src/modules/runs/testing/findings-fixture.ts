@@ -8,7 +8,11 @@ import type { FixtureLink, FixturePage } from './snapshot-writer.js';
 export const HANDBOOK_PAGES: FixturePage[] = [
   { path: 'index.md', title: 'Workshop handbook', text: 'Welcome to the workshop. Start with the tools guide.' },
   { path: 'tools/setup.md', title: 'Setting up the bench', text: 'Bolt the vise to the bench before truing wheels.' },
-  { path: 'tools/install.md', title: 'Installing the stand', text: 'The repair stand clamps the seat post. See the spoke tension log for wheel work.' },
+  {
+    path: 'tools/install.md',
+    title: 'Installing the stand',
+    text: 'The repair stand clamps the seat post. See the spoke tension log for wheel work.',
+  },
   { path: 'tools/advanced.md', title: 'Advanced wheel truing', text: 'Truing wheels needs a dish gauge and patience.' },
   { path: 'tools/deep/hubs.md', title: 'Hub overhaul', text: 'Hub bearings wear out; repack them every season.' },
   { path: 'spoke-log.md', title: 'Spoke tension log', text: 'Readings from the tension meter, wheel by wheel.' },

@@ -15,7 +15,10 @@ export function snapshotOf(t: TestApp, docSetId: string, pages: readonly Fixture
 }
 
 export async function startRun(t: TestApp, docSetId: string, settings?: Record<string, unknown>): Promise<string> {
-  const response = await t.http.post(`/api/doc-sets/${docSetId}/runs`).set('Authorization', `Bearer ${await t.tokenFor('editor')}`).send(settings ? { settings } : {});
+  const response = await t.http
+    .post(`/api/doc-sets/${docSetId}/runs`)
+    .set('Authorization', `Bearer ${await t.tokenFor('editor')}`)
+    .send(settings ? { settings } : {});
   if (response.status !== 202) throw new Error(`run not started: ${response.status} ${JSON.stringify(response.body)}`);
   return response.body.run.id as string;
 }

@@ -33,7 +33,12 @@ export interface FixtureLink {
 
 const BATCH = 5_000;
 
-export async function writeSnapshot(db: Database, docSetId: string, pages: readonly FixturePage[], links: readonly FixtureLink[]): Promise<{ snapshotId: string; pageIds: Map<string, number> }> {
+export async function writeSnapshot(
+  db: Database,
+  docSetId: string,
+  pages: readonly FixturePage[],
+  links: readonly FixtureLink[],
+): Promise<{ snapshotId: string; pageIds: Map<string, number> }> {
   const [{ id: snapshotId }] = await queryRows<{ id: string }>(
     db,
     sql`insert into snapshots (doc_set_id, status, source, page_count, link_count, finished_at) values (${docSetId}, 'importing', 'upload', ${pages.length}, ${links.length}, now()) returning id`,
@@ -69,7 +74,12 @@ function titleOf(page: FixturePage): string {
 }
 
 function pageFacts(page: FixturePage) {
-  const headings = (page.headings ?? []).map((text, i) => ({ depth: 2, text, slug: text.toLowerCase().replace(/[^a-z0-9]+/g, '-'), line: i + 3 }));
+  const headings = (page.headings ?? []).map((text, i) => ({
+    depth: 2,
+    text,
+    slug: text.toLowerCase().replace(/[^a-z0-9]+/g, '-'),
+    line: i + 3,
+  }));
   return {
     path: page.path,
     title: titleOf(page),

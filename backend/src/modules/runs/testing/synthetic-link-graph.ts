@@ -11,7 +11,9 @@ const WORDS = ['install', 'configure', 'deploy', 'cluster', 'backup', 'token', '
 
 export function syntheticLinkGraph(pageCount: number, linksPerPage: number, seed = 42): { pages: FixturePage[]; links: FixtureLink[] } {
   const random = mulberry32(seed);
-  const paths = Array.from({ length: pageCount }, (_, i) => (i === 0 ? 'index.md' : `section-${Math.floor(i / SECTION_SIZE)}/page-${i % SECTION_SIZE}.md`));
+  const paths = Array.from({ length: pageCount }, (_, i) =>
+    i === 0 ? 'index.md' : `section-${Math.floor(i / SECTION_SIZE)}/page-${i % SECTION_SIZE}.md`,
+  );
   const pages = paths.map((path, i) => ({
     path,
     title: i === 0 ? 'Home' : `${WORDS[i % WORDS.length]} guide ${i}`,
@@ -37,4 +39,3 @@ export function syntheticLinkGraph(pageCount: number, linksPerPage: number, seed
   for (let start = SECTION_SIZE; start < pageCount; start += SECTION_SIZE) links.push({ from: 'index.md', to: paths[start], line: 1 });
   return { pages, links };
 }
-

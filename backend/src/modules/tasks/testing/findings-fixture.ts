@@ -25,33 +25,82 @@ export async function createFixtureDocSet(db: Database, name = 'Harbour Ops Hand
 }
 
 /** Inserts one snapshot + finished run for the doc set; returns their ids. Scores default to an even spread. */
-export async function insertFixtureRun(db: Database, docSetId: string, fixturePages: FixturePage[], finishedAt = new Date()): Promise<{ snapshotId: string; runId: string }> {
+export async function insertFixtureRun(
+  db: Database,
+  docSetId: string,
+  fixturePages: FixturePage[],
+  finishedAt = new Date(),
+): Promise<{ snapshotId: string; runId: string }> {
   const { defaultDocSetSettings } = await import('@linkloom/shared');
-  const [snapshot] = await db.insert(snapshots).values({ docSetId, status: 'ready', source: 'demo', pageCount: fixturePages.length, finishedAt }).returning({ id: snapshots.id });
+  const [snapshot] = await db
+    .insert(snapshots)
+    .values({ docSetId, status: 'ready', source: 'demo', pageCount: fixturePages.length, finishedAt })
+    .returning({ id: snapshots.id });
   const pageRows = await db
     .insert(pages)
-    .values(fixturePages.map((p) => ({
-      snapshotId: snapshot.id, path: p.path, title: p.title ?? p.path, contentHash: `hash-${p.path}`, wordCount: p.wordCount ?? 400,
-      ownerEmail: p.ownerEmail ?? null, reviewedAt: p.reviewedAt ?? null, protected: p.protected ?? false, facts: {}, rawLinks: [],
-    })))
+    .values(
+      fixturePages.map((p) => ({
+        snapshotId: snapshot.id,
+        path: p.path,
+        title: p.title ?? p.path,
+        contentHash: `hash-${p.path}`,
+        wordCount: p.wordCount ?? 400,
+        ownerEmail: p.ownerEmail ?? null,
+        reviewedAt: p.reviewedAt ?? null,
+        protected: p.protected ?? false,
+        facts: {},
+        rawLinks: [],
+      })),
+    )
     .returning({ id: pages.id, path: pages.path });
   const idOf = new Map(pageRows.map((r) => [r.path, r.id]));
-  const broken = fixturePages.flatMap((p) => (p.brokenLinks ?? []).map((b) => ({
-    snapshotId: snapshot.id, sourcePageId: idOf.get(p.path)!, line: b.line, column: 1, href: b.href, kind: 'internal', status: b.status ?? 'broken',
-  })));
+  const broken = fixturePages.flatMap((p) =>
+    (p.brokenLinks ?? []).map((b) => ({
+      snapshotId: snapshot.id,
+      sourcePageId: idOf.get(p.path)!,
+      line: b.line,
+      column: 1,
+      href: b.href,
+      kind: 'internal',
+      status: b.status ?? 'broken',
+    })),
+  );
   if (broken.length) await db.insert(links).values(broken);
   const [run] = await db
     .insert(runs)
-    .values({ docSetId, snapshotId: snapshot.id, status: 'finished', trigger: 'manual', settings: defaultDocSetSettings(), startedAt: finishedAt, finishedAt })
+    .values({
+      docSetId,
+      snapshotId: snapshot.id,
+      status: 'finished',
+      trigger: 'manual',
+      settings: defaultDocSetSettings(),
+      startedAt: finishedAt,
+      finishedAt,
+    })
     .returning({ id: runs.id });
   const n = fixturePages.length;
-  await db.insert(pageMetrics).values(fixturePages.map((p, i) => {
-    const score = p.stationaryScore ?? (n - i) / ((n * (n + 1)) / 2);
-    return {
-      runId: run.id, pageId: idOf.get(p.path)!, path: p.path, title: p.title ?? p.path, stationaryScore: score, timesAverage: score * n, rank: i + 1,
-      inboundCount: p.inboundCount ?? (p.orphan ? 0 : 2), outboundCount: p.deadEnd ? 0 : 3, depth: p.reachable === false ? null : 1,
-      reachable: p.reachable ?? true, orphan: p.orphan ?? false, deadEnd: p.deadEnd ?? false, deep: false, brokenLinkCount: p.brokenLinks?.length ?? 0, wordCount: p.wordCount ?? 400,
-    };
-  }));
+  await db.insert(pageMetrics).values(
+    fixturePages.map((p, i) => {
+      const score = p.stationaryScore ?? (n - i) / ((n * (n + 1)) / 2);
+      return {
+        runId: run.id,
+        pageId: idOf.get(p.path)!,
+        path: p.path,
+        title: p.title ?? p.path,
+        stationaryScore: score,
+        timesAverage: score * n,
+        rank: i + 1,
+        inboundCount: p.inboundCount ?? (p.orphan ? 0 : 2),
+        outboundCount: p.deadEnd ? 0 : 3,
+        depth: p.reachable === false ? null : 1,
+        reachable: p.reachable ?? true,
+        orphan: p.orphan ?? false,
+        deadEnd: p.deadEnd ?? false,
+        deep: false,
+        brokenLinkCount: p.brokenLinks?.length ?? 0,
+        wordCount: p.wordCount ?? 400,
+      };
+    }),
+  );
   return { snapshotId: snapshot.id, runId: run.id };
 }

@@ -54,11 +54,30 @@ export function SignInForm({ onSubmit, busy }: SignInFormProps) {
   return (
     <Box component="form" noValidate onSubmit={submit} aria-label="Sign in">
       <Stack spacing={2}>
-        {failure && <Alert severity="error" role="alert">{failure}</Alert>}
-        <TextField label="E-mail" type="email" autoComplete="username" autoFocus value={email}
-          onChange={(e) => setEmail(e.target.value)} error={Boolean(errors.email)} helperText={errors.email} />
-        <TextField label="Password" type="password" autoComplete="current-password" value={password}
-          onChange={(e) => setPassword(e.target.value)} error={Boolean(errors.password)} helperText={errors.password} />
+        {failure && (
+          <Alert severity="error" role="alert">
+            {failure}
+          </Alert>
+        )}
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+          autoFocus
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={Boolean(errors.email)}
+          helperText={errors.email}
+        />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={Boolean(errors.password)}
+          helperText={errors.password}
+        />
         <Button type="submit" variant="contained" size="large" disabled={busy}>
           {busy ? 'Signing in…' : 'Sign in'}
         </Button>

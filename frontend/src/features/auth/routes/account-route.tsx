@@ -30,27 +30,55 @@ export default function AccountRoute() {
     const found = current ? newPasswordProblem(next, repeat, current) : 'Enter your current password.';
     setProblem(found);
     if (found) return;
-    change.mutate({ currentPassword: current, newPassword: next }, {
-      onSuccess: () => {
-        notify('Password changed');
-        setCurrent(''); setNext(''); setRepeat('');
+    change.mutate(
+      { currentPassword: current, newPassword: next },
+      {
+        onSuccess: () => {
+          notify('Password changed');
+          setCurrent('');
+          setNext('');
+          setRepeat('');
+        },
+        onError: (error) => setProblem(errorMessage(error)),
       },
-      onError: (error) => setProblem(errorMessage(error)),
-    });
+    );
   };
 
   return (
     <Box sx={{ maxWidth: 520 }}>
-      <PageHeader title="Your account" subtitle={session ? `${session.user.name} · ${session.user.email} · ${session.user.role}` : undefined} />
+      <PageHeader
+        title="Your account"
+        subtitle={session ? `${session.user.name} · ${session.user.email} · ${session.user.role}` : undefined}
+      />
       <Paper variant="outlined" sx={{ p: 3 }}>
         <Box component="form" noValidate onSubmit={submit} aria-label="Change password">
           <Stack spacing={2}>
             {problem && <Alert severity="error">{problem}</Alert>}
-            <TextField label="Current password" type="password" autoComplete="current-password" value={current} onChange={(e) => setCurrent(e.target.value)} />
-            <TextField label="New password" type="password" autoComplete="new-password" value={next} onChange={(e) => setNext(e.target.value)}
-              helperText="At least 8 characters; a short sentence is easy to remember and hard to guess." />
-            <TextField label="Repeat new password" type="password" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} />
-            <Button type="submit" variant="contained" disabled={change.isPending} sx={{ alignSelf: 'flex-start' }}>Change password</Button>
+            <TextField
+              label="Current password"
+              type="password"
+              autoComplete="current-password"
+              value={current}
+              onChange={(e) => setCurrent(e.target.value)}
+            />
+            <TextField
+              label="New password"
+              type="password"
+              autoComplete="new-password"
+              value={next}
+              onChange={(e) => setNext(e.target.value)}
+              helperText="At least 8 characters; a short sentence is easy to remember and hard to guess."
+            />
+            <TextField
+              label="Repeat new password"
+              type="password"
+              autoComplete="new-password"
+              value={repeat}
+              onChange={(e) => setRepeat(e.target.value)}
+            />
+            <Button type="submit" variant="contained" disabled={change.isPending} sx={{ alignSelf: 'flex-start' }}>
+              Change password
+            </Button>
           </Stack>
         </Box>
       </Paper>

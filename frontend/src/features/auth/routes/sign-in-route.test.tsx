@@ -9,7 +9,9 @@ const user = { id: 'u1', email: 'ada@example.test', name: 'Ada', role: 'editor' 
 
 function renderSignIn(route = '/sign-in?next=%2Fdoc-sets%2Fd1%2Fruns') {
   return renderWithProviders(<SignInRoute />, {
-    route, path: '/sign-in', extraRoutes: [{ path: '/doc-sets/:id/runs', element: <p>runs screen</p> }],
+    route,
+    path: '/sign-in',
+    extraRoutes: [{ path: '/doc-sets/:id/runs', element: <p>runs screen</p> }],
   });
 }
 

@@ -23,16 +23,20 @@ export default function SignInRoute() {
       <Paper variant="outlined" sx={{ p: 4, width: '100%', maxWidth: 400 }}>
         <Stack direction="row" spacing={1.5} sx={{ alignItems: 'center', mb: 1 }}>
           <LogoMark size={40} />
-          <Typography variant="h1" component="h1">Linkloom</Typography>
+          <Typography variant="h1" component="h1">
+            Linkloom
+          </Typography>
         </Stack>
         <Typography variant="body2" color="text.secondary" sx={{ mb: 3 }}>
           Sign in to see how your documentation hangs together.
         </Typography>
-        <SignInForm busy={signIn.isPending}
+        <SignInForm
+          busy={signIn.isPending}
           onSubmit={async (input) => {
             await signIn.mutateAsync(input);
             navigate(next, { replace: true });
-          }} />
+          }}
+        />
       </Paper>
     </Box>
   );

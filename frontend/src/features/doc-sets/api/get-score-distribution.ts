@@ -9,7 +9,8 @@ import { docSetQueryKey } from './get-doc-set.js';
 export async function getScoreDistribution(docSetId: string, runId: string, signal?: AbortSignal): Promise<ScoreDistribution | null> {
   try {
     return await apiFetch<ScoreDistribution>(
-      `/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/score-distribution`, { signal },
+      `/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/score-distribution`,
+      { signal },
     );
   } catch (error) {
     if (error instanceof ApiError && (error.status === 404 || error.status === 501)) return null;

@@ -7,7 +7,8 @@ export const snapshotsQueryKey = (docSetId: string) => [...docSetQueryKey(docSet
 
 export async function getSnapshots(docSetId: string, signal?: AbortSignal): Promise<Snapshot[]> {
   const result = await apiFetch<ListResult<Snapshot> | Snapshot[]>(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots`, {
-    query: { page: 1, pageSize: 100 }, signal,
+    query: { page: 1, pageSize: 100 },
+    signal,
   });
   return Array.isArray(result) ? result : result.items;
 }

@@ -5,7 +5,8 @@ import { docSetQueryKey } from './get-doc-set.js';
 
 export function getTopPages(docSetId: string, runId: string, limit: number, signal?: AbortSignal): Promise<ListResult<PageItem>> {
   return apiFetch<ListResult<PageItem>>(`/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/pages`, {
-    query: { sort: '-stationaryScore', page: 1, pageSize: limit }, signal,
+    query: { sort: '-stationaryScore', page: 1, pageSize: limit },
+    signal,
   });
 }
 

@@ -16,13 +16,16 @@ export function CreateDocSetDialog({ open, onClose }: { open: boolean; onClose: 
     if (!name.trim()) return setProblem('Give the doc set a name, e.g. “Operator handbook”.');
     if (name.trim().length > 120) return setProblem('Keep the name under 120 characters.');
     setProblem(null);
-    create.mutate({ name: name.trim(), description: description.trim() || undefined }, {
-      onSuccess: (docSet) => {
-        onClose();
-        navigate(`/doc-sets/${encodeURIComponent(docSet.id)}`);
+    create.mutate(
+      { name: name.trim(), description: description.trim() || undefined },
+      {
+        onSuccess: (docSet) => {
+          onClose();
+          navigate(`/doc-sets/${encodeURIComponent(docSet.id)}`);
+        },
+        onError: (error) => setProblem(errorMessage(error)),
       },
-      onError: (error) => setProblem(errorMessage(error)),
-    });
+    );
   };
 
   return (
@@ -33,13 +36,21 @@ export function CreateDocSetDialog({ open, onClose }: { open: boolean; onClose: 
           <Stack spacing={2} sx={{ mt: 1 }}>
             {problem && <Alert severity="error">{problem}</Alert>}
             <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} autoFocus required />
-            <TextField label="Description" value={description} onChange={(e) => setDescription(e.target.value)} multiline minRows={2}
-              helperText="Optional: who reads these docs, where they are published." />
+            <TextField
+              label="Description"
+              value={description}
+              onChange={(e) => setDescription(e.target.value)}
+              multiline
+              minRows={2}
+              helperText="Optional: who reads these docs, where they are published."
+            />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" disabled={create.isPending}>Create</Button>
+          <Button type="submit" variant="contained" disabled={create.isPending}>
+            Create
+          </Button>
         </DialogActions>
       </form>
     </Dialog>

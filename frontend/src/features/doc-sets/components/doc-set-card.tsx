@@ -11,22 +11,37 @@ export function DocSetCard({ docSet }: { docSet: DocSet }) {
   const runs = useRuns(docSet.id);
   const { latest, previous } = latestFinished(runs.data);
   const busy = runs.data?.some(isRunBusy);
-  const trend = (runs.data ?? []).filter((r) => r.status === 'finished' && r.counts).reverse().map((r) => r.counts!.brokenLinks);
+  const trend = (runs.data ?? [])
+    .filter((r) => r.status === 'finished' && r.counts)
+    .reverse()
+    .map((r) => r.counts!.brokenLinks);
   return (
     <Card sx={{ height: '100%' }}>
-      <CardActionArea component={RouterLink} to={`/doc-sets/${encodeURIComponent(docSet.id)}`} sx={{ height: '100%', alignItems: 'stretch' }}>
+      <CardActionArea
+        component={RouterLink}
+        to={`/doc-sets/${encodeURIComponent(docSet.id)}`}
+        sx={{ height: '100%', alignItems: 'stretch' }}
+      >
         <CardContent>
           <Box sx={{ display: 'flex', alignItems: 'center', gap: 1, mb: 0.5 }}>
-            <Typography variant="h3" component="h2" sx={{ flex: 1 }}>{docSet.name}</Typography>
+            <Typography variant="h3" component="h2" sx={{ flex: 1 }}>
+              {docSet.name}
+            </Typography>
             {busy && <Chip size="small" color="secondary" label="analysing" />}
           </Box>
           <Typography variant="body2" color="text.secondary" sx={{ mb: 2, minHeight: 20 }} noWrap>
             {docSet.description || ' '}
           </Typography>
           {runs.isLoading && <Skeleton variant="rounded" height={64} />}
-          {runs.isError && <Typography variant="body2" color="error">Runs could not be loaded.</Typography>}
+          {runs.isError && (
+            <Typography variant="body2" color="error">
+              Runs could not be loaded.
+            </Typography>
+          )}
           {runs.isSuccess && !latest && (
-            <Typography variant="body2" color="text.secondary">No finished run yet: open it and upload a zip of your Markdown.</Typography>
+            <Typography variant="body2" color="text.secondary">
+              No finished run yet: open it and upload a zip of your Markdown.
+            </Typography>
           )}
           {latest?.counts && (
             <>

@@ -28,7 +28,9 @@ export const HEADLINES: Headline[] = [
 /** Finished runs with counts, oldest first: the x axis of every trend. */
 export function trendRuns(runs: Run[] | undefined): Array<Run & { counts: RunCounts; finishedAt: string }> {
   return (runs ?? [])
-    .filter((r): r is Run & { counts: RunCounts; finishedAt: string } => r.status === 'finished' && r.counts != null && r.finishedAt != null)
+    .filter(
+      (r): r is Run & { counts: RunCounts; finishedAt: string } => r.status === 'finished' && r.counts != null && r.finishedAt != null,
+    )
     .sort((a, b) => Date.parse(a.finishedAt) - Date.parse(b.finishedAt));
 }
 

@@ -18,8 +18,12 @@ export function TrendChart({ runs }: { runs: Run[] | undefined }) {
   if (points.length < 2) {
     return (
       <Paper variant="outlined" sx={{ p: 2 }}>
-        <Typography variant="h3" component="h2" gutterBottom>Trends</Typography>
-        <Typography variant="body2" color="text.secondary">Trends appear after the second finished run.</Typography>
+        <Typography variant="h3" component="h2" gutterBottom>
+          Trends
+        </Typography>
+        <Typography variant="body2" color="text.secondary">
+          Trends appear after the second finished run.
+        </Typography>
       </Paper>
     );
   }
@@ -29,19 +33,24 @@ export function TrendChart({ runs }: { runs: Run[] | undefined }) {
   const x = points.map((_, i) => i);
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Typography variant="h3" component="h2" sx={{ mb: 1 }}>Trends over {points.length} runs</Typography>
+      <Typography variant="h3" component="h2" sx={{ mb: 1 }}>
+        Trends over {points.length} runs
+      </Typography>
       <ToggleButtonGroup size="small" exclusive value={group} onChange={(_, v) => v && setGroup(v)} aria-label="Which counts">
         <ToggleButton value="links">Broken links</ToggleButton>
         <ToggleButton value="structure">Structure</ToggleButton>
         <ToggleButton value="size">Pages</ToggleButton>
       </ToggleButtonGroup>
-      <LineChart height={260} colors={chartColors}
+      <LineChart
+        height={260}
+        colors={chartColors}
         xAxis={[{ data: x, scaleType: 'point', valueFormatter: (i: number) => `Run ${i + 1}, ${dates[i]}` }]}
         series={GROUPS[group].map((key) => ({
           data: points.map((r) => r.counts[key]),
           label: HEADLINES.find((h) => h.key === key)?.label ?? key,
           showMark: points.length < 30,
-        }))} />
+        }))}
+      />
     </Paper>
   );
 }

@@ -16,9 +16,16 @@ class FakeXhr {
   headers: Record<string, string> = {};
   url = '';
   body: FormData | null = null;
-  open(_method: string, url: string) { this.url = url; }
-  setRequestHeader(name: string, value: string) { this.headers[name] = value; }
-  send(body: FormData) { this.body = body; FakeXhr.last = this; }
+  open(_method: string, url: string) {
+    this.url = url;
+  }
+  setRequestHeader(name: string, value: string) {
+    this.headers[name] = value;
+  }
+  send(body: FormData) {
+    this.body = body;
+    FakeXhr.last = this;
+  }
 }
 
 afterEach(() => vi.unstubAllGlobals());
@@ -27,7 +34,16 @@ describe('upload archive', () => {
   it('shows real upload progress, then import progress, then the import report', async () => {
     signInAs('editor');
     vi.stubGlobal('XMLHttpRequest', FakeXhr);
-    let snapshot: Record<string, unknown> = { id: 's1', status: 'importing', progress: { done: 3, total: 12 }, warnings: [], error: null, pageCount: null, linkCount: null, assetCount: null };
+    let snapshot: Record<string, unknown> = {
+      id: 's1',
+      status: 'importing',
+      progress: { done: 3, total: 12 },
+      warnings: [],
+      error: null,
+      pageCount: null,
+      linkCount: null,
+      assetCount: null,
+    };
     vi.stubGlobal('fetch', fakeFetch({ 'GET /api/doc-sets/d1/snapshots/s1': () => ({ body: snapshot }) }).fn);
     renderWithProviders(<UploadArchiveDialog docSetId="d1" open onClose={() => undefined} />);
 
@@ -47,8 +63,15 @@ describe('upload archive', () => {
     act(() => xhr.onload!());
     expect(await screen.findByText('Importing… 3 of 12 files')).toBeTruthy();
 
-    snapshot = { ...snapshot, status: 'ready', progress: { done: 12, total: 12 }, pageCount: 10, linkCount: 31, assetCount: 2,
-      warnings: [{ path: 'guide/odd.md', code: 'FRONT_MATTER_INVALID', message: 'Front matter is not valid YAML' }] };
+    snapshot = {
+      ...snapshot,
+      status: 'ready',
+      progress: { done: 12, total: 12 },
+      pageCount: 10,
+      linkCount: 31,
+      assetCount: 2,
+      warnings: [{ path: 'guide/odd.md', code: 'FRONT_MATTER_INVALID', message: 'Front matter is not valid YAML' }],
+    };
     expect(await screen.findByText(/Imported 10 pages, 31 links and 2 other files/, undefined, { timeout: 4000 })).toBeTruthy();
     expect(screen.getByText('guide/odd.md')).toBeTruthy();
   });

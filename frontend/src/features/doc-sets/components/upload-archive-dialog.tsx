@@ -46,7 +46,11 @@ export function UploadArchiveDialog({ docSetId, open, onClose }: { docSetId: str
     <Dialog open={open} onClose={upload.isPending ? undefined : close} fullWidth maxWidth="sm">
       <DialogTitle>Upload archive</DialogTitle>
       <DialogContent>
-        {problem && <Alert severity="error" sx={{ mb: 2 }}>{problem}</Alert>}
+        {problem && (
+          <Alert severity="error" sx={{ mb: 2 }}>
+            {problem}
+          </Alert>
+        )}
         {!upload.isPending && !snapshotId && <ArchiveDropZone onFile={start} />}
         {upload.isPending && (
           <Box>
@@ -56,17 +60,21 @@ export function UploadArchiveDialog({ docSetId, open, onClose }: { docSetId: str
         )}
         {importing && (
           <Box>
-            <Typography gutterBottom>
-              Importing… {total ? `${s!.progress.done} of ${total} files` : 'unpacking the archive'}
-            </Typography>
-            <LinearProgress variant={total ? 'determinate' : 'indeterminate'} value={total ? (s!.progress.done / total) * 100 : undefined} aria-label="Import progress" />
+            <Typography gutterBottom>Importing… {total ? `${s!.progress.done} of ${total} files` : 'unpacking the archive'}</Typography>
+            <LinearProgress
+              variant={total ? 'determinate' : 'indeterminate'}
+              value={total ? (s!.progress.done / total) * 100 : undefined}
+              aria-label="Import progress"
+            />
           </Box>
         )}
         {snapshot.isError && <Alert severity="error">{errorMessage(snapshot.error)}</Alert>}
         {s && !isSnapshotBusy(s) && <ImportReport snapshot={s} />}
       </DialogContent>
       <DialogActions>
-        <Button onClick={close} disabled={upload.isPending}>{s && !isSnapshotBusy(s) ? 'Done' : importing ? 'Close (import continues)' : 'Cancel'}</Button>
+        <Button onClick={close} disabled={upload.isPending}>
+          {s && !isSnapshotBusy(s) ? 'Done' : importing ? 'Close (import continues)' : 'Cancel'}
+        </Button>
       </DialogActions>
     </Dialog>
   );

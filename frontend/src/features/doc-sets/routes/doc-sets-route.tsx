@@ -15,21 +15,35 @@ export default function DocSetsRoute() {
   const canCreate = useRoleAtLeast('editor');
   const [creating, setCreating] = useState(false);
   const newButton = canCreate && (
-    <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setCreating(true)}>New doc set</Button>
+    <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setCreating(true)}>
+      New doc set
+    </Button>
   );
   return (
     <>
-      <PageHeader title="Doc sets" subtitle="Each doc set is one body of Markdown documentation, analysed after every upload." actions={newButton} />
+      <PageHeader
+        title="Doc sets"
+        subtitle="Each doc set is one body of Markdown documentation, analysed after every upload."
+        actions={newButton}
+      />
       {docSets.isLoading && <LoadingSkeleton variant="cards" count={3} />}
       {docSets.isError && <ErrorPanel error={docSets.error} onRetry={() => docSets.refetch()} />}
       {docSets.data?.length === 0 && (
-        <EmptyState title="No doc sets yet"
-          hint={canCreate ? 'Create one, then upload a zip of your Markdown to see its links and page scores.' : 'An editor or admin needs to create the first doc set.'}
-          action={newButton} />
+        <EmptyState
+          title="No doc sets yet"
+          hint={
+            canCreate
+              ? 'Create one, then upload a zip of your Markdown to see its links and page scores.'
+              : 'An editor or admin needs to create the first doc set.'
+          }
+          action={newButton}
+        />
       )}
       {docSets.data && docSets.data.length > 0 && (
         <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'repeat(auto-fill, minmax(360px, 1fr))' }}>
-          {docSets.data.map((docSet) => <DocSetCard key={docSet.id} docSet={docSet} />)}
+          {docSets.data.map((docSet) => (
+            <DocSetCard key={docSet.id} docSet={docSet} />
+          ))}
         </Box>
       )}
       {canCreate && <CreateDocSetDialog open={creating} onClose={() => setCreating(false)} />}

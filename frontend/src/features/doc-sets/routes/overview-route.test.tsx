@@ -12,7 +12,10 @@ function api(runs: unknown[], distributionStatus = 404) {
     'GET /api/doc-sets/d1/runs': () => ({ body: { items: runs, total: runs.length, page: 1, pageSize: 500 } }),
     'GET /api/doc-sets/d1/snapshots': () => ({ body: { items: [], total: 0, page: 1, pageSize: 100 } }),
     'GET /api/doc-sets/d1/runs/r2/pages': () => ({ body: { items: [], total: 0, page: 1, pageSize: 10 } }),
-    'GET /api/doc-sets/d1/runs/r2/score-distribution': () => ({ status: distributionStatus, body: { statusCode: distributionStatus, code: 'NOT_FOUND', message: 'no' } }),
+    'GET /api/doc-sets/d1/runs/r2/score-distribution': () => ({
+      status: distributionStatus,
+      body: { statusCode: distributionStatus, code: 'NOT_FOUND', message: 'no' },
+    }),
   });
 }
 
@@ -22,7 +25,11 @@ describe('overview', () => {
   it('shows headline counts with the change since the previous finished run', async () => {
     signInAs('viewer');
     // Newest first after sorting; r3 is still running and must not count as "latest".
-    const fake = api([run('r1', 1, { counts: counts({ brokenLinks: 12 }) }), run('r2', 2), run('r3', 3, { status: 'running', counts: null, finishedAt: null })]);
+    const fake = api([
+      run('r1', 1, { counts: counts({ brokenLinks: 12 }) }),
+      run('r2', 2),
+      run('r3', 3, { status: 'running', counts: null, finishedAt: null }),
+    ]);
     vi.stubGlobal('fetch', fake.fn);
     render();
     const card = (await screen.findByText('−3 since the previous run')).closest('.MuiCard-root') as HTMLElement;

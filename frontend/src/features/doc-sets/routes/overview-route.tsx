@@ -26,19 +26,29 @@ export default function OverviewRoute() {
 
   if (docSet.isError) return <ErrorPanel error={docSet.error} onRetry={() => docSet.refetch()} />;
   const uploadButton = canUpload && (
-    <Button variant="contained" startIcon={<CloudUploadOutlined />} onClick={() => setUploading(true)}>Upload archive</Button>
+    <Button variant="contained" startIcon={<CloudUploadOutlined />} onClick={() => setUploading(true)}>
+      Upload archive
+    </Button>
   );
   return (
     <>
-      <PageHeader title={docSet.data?.name ?? 'Overview'}
-        subtitle={running ? 'An analysis is running; the numbers refresh when it finishes.' : docSet.data?.description ?? undefined}
-        actions={uploadButton} />
+      <PageHeader
+        title={docSet.data?.name ?? 'Overview'}
+        subtitle={running ? 'An analysis is running; the numbers refresh when it finishes.' : (docSet.data?.description ?? undefined)}
+        actions={uploadButton}
+      />
       <Stack spacing={3}>
         {runs.isError && <ErrorPanel error={runs.error} onRetry={() => runs.refetch()} />}
         {runs.isSuccess && !latest && !running && (
-          <EmptyState title="No analysis yet"
-            hint={canUpload ? 'No snapshot yet: upload a zip of your Markdown and Linkloom analyses it straight away.' : 'An editor needs to upload a zip of the Markdown first.'}
-            action={uploadButton} />
+          <EmptyState
+            title="No analysis yet"
+            hint={
+              canUpload
+                ? 'No snapshot yet: upload a zip of your Markdown and Linkloom analyses it straight away.'
+                : 'An editor needs to upload a zip of the Markdown first.'
+            }
+            action={uploadButton}
+          />
         )}
         {(runs.isLoading || latest) && <HeadlineStats docSetId={docSetId} latest={latest} previous={previous} loading={runs.isLoading} />}
         {latest && (

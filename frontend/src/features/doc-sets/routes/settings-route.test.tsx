@@ -17,10 +17,12 @@ function api() {
   });
 }
 
-const render = () => renderWithProviders(<SettingsRoute />, {
-  route: '/doc-sets/d1/settings', path: '/doc-sets/:docSetId/settings',
-  extraRoutes: [{ path: '/doc-sets/:docSetId/runs', element: <p>runs list</p> }],
-});
+const render = () =>
+  renderWithProviders(<SettingsRoute />, {
+    route: '/doc-sets/d1/settings',
+    path: '/doc-sets/:docSetId/settings',
+    extraRoutes: [{ path: '/doc-sets/:docSetId/runs', element: <p>runs list</p> }],
+  });
 
 describe('settings', () => {
   it('refuses an out-of-range damping factor without calling the server', async () => {

@@ -40,16 +40,22 @@ export default function SettingsRoute() {
     const { settings, errors: found } = fromForm(form);
     setErrors(found);
     if (!settings) return notify('Some settings need fixing; see the marked fields.', 'warning');
-    update.mutate({ settings }, {
-      onSuccess: () => {
-        if (!reanalyse) return notify('Settings saved');
-        createRun.mutate(undefined, {
-          onSuccess: () => { notify('Saved; a new analysis is running'); navigate(`/doc-sets/${encodeURIComponent(docSetId)}/runs`); },
-          onError: (error) => notify(`Saved, but the analysis did not start: ${errorMessage(error)}`, 'error'),
-        });
+    update.mutate(
+      { settings },
+      {
+        onSuccess: () => {
+          if (!reanalyse) return notify('Settings saved');
+          createRun.mutate(undefined, {
+            onSuccess: () => {
+              notify('Saved; a new analysis is running');
+              navigate(`/doc-sets/${encodeURIComponent(docSetId)}/runs`);
+            },
+            onError: (error) => notify(`Saved, but the analysis did not start: ${errorMessage(error)}`, 'error'),
+          });
+        },
+        onError: (error) => notify(errorMessage(error), 'error'),
       },
-      onError: (error) => notify(errorMessage(error), 'error'),
-    });
+    );
   };
   const fieldProps = { form, errors, set, readOnly: !canEdit };
   const busy = update.isPending || createRun.isPending;
@@ -57,13 +63,22 @@ export default function SettingsRoute() {
 
   return (
     <Box sx={{ maxWidth: 900 }}>
-      <PageHeader title="Settings" subtitle={docSet.data?.name}
-        actions={canEdit && (
-          <>
-            <Button variant="outlined" onClick={() => save(false)} disabled={busy}>Save</Button>
-            <Button variant="contained" onClick={() => save(true)} disabled={busy}>Save and re-analyse</Button>
-          </>
-        )} />
+      <PageHeader
+        title="Settings"
+        subtitle={docSet.data?.name}
+        actions={
+          canEdit && (
+            <>
+              <Button variant="outlined" onClick={() => save(false)} disabled={busy}>
+                Save
+              </Button>
+              <Button variant="contained" onClick={() => save(true)} disabled={busy}>
+                Save and re-analyse
+              </Button>
+            </>
+          )
+        }
+      />
       <Stack spacing={3}>
         {!canEdit && <Alert severity="info">You can read these settings; an editor or admin can change them.</Alert>}
         {hasErrors && <Alert severity="error">Some settings need fixing before they can be saved.</Alert>}

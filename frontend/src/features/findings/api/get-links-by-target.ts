@@ -7,7 +7,12 @@ import type { LinkTargetGroup } from '../types.js';
 import { linksQueryParams, type LinksQuery } from './get-links.js';
 
 /** The same links, one row per missing target with the pages that point at it. */
-export function getLinksByTarget(docSetId: string, runId: string, query: LinksQuery, signal?: AbortSignal): Promise<ListResult<LinkTargetGroup>> {
+export function getLinksByTarget(
+  docSetId: string,
+  runId: string,
+  query: LinksQuery,
+  signal?: AbortSignal,
+): Promise<ListResult<LinkTargetGroup>> {
   return apiFetch<ListResult<LinkTargetGroup>>(`${runPath(docSetId, runId)}/links`, { query: linksQueryParams(query, 'target'), signal });
 }
 

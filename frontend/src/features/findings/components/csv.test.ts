@@ -14,6 +14,14 @@ describe('csv', () => {
 
   // RFC 4180 section 2, rules 1 and 3: records end with CRLF, the header has the same format as records.
   it('ends every record with CRLF', () => {
-    expect(toCsv(['path', 'line'], [['a.md', 3], ['b,c.md', 4]])).toBe('path,line\r\na.md,3\r\n"b,c.md",4\r\n');
+    expect(
+      toCsv(
+        ['path', 'line'],
+        [
+          ['a.md', 3],
+          ['b,c.md', 4],
+        ],
+      ),
+    ).toBe('path,line\r\na.md,3\r\n"b,c.md",4\r\n');
   });
 });

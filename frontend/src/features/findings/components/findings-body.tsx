@@ -29,13 +29,20 @@ export function FindingsBody({ docSetId, runId, view, kind, counts, grouping, ta
   const canGroup = view.id === 'broken-links';
   return (
     <Box sx={{ minWidth: 0 }}>
-      <Typography variant="h2" sx={{ mb: 0.5 }}>{view.label}</Typography>
-      <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>{view.need}</Typography>
+      <Typography variant="h2" sx={{ mb: 0.5 }}>
+        {view.label}
+      </Typography>
+      <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>
+        {view.need}
+      </Typography>
       <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', mb: 2 }}>
         {view.kinds.length > 1 && (
           <ToggleButtonGroup size="small" exclusive value={kind.id} onChange={(_, v) => v && onKindChange(v)} aria-label="Which finding">
             {view.kinds.map((k) => (
-              <ToggleButton key={k.id} value={k.id}>{k.label}{counts ? ` (${k.count(counts)})` : ''}</ToggleButton>
+              <ToggleButton key={k.id} value={k.id}>
+                {k.label}
+                {counts ? ` (${k.count(counts)})` : ''}
+              </ToggleButton>
             ))}
           </ToggleButtonGroup>
         )}
@@ -48,9 +55,8 @@ export function FindingsBody({ docSetId, runId, view, kind, counts, grouping, ta
       </Box>
       {view.source === 'islands' && <IslandsList docSetId={docSetId} runId={runId} />}
       {view.source === 'pages' && <PageFindingsTable key={kind.id} {...props} />}
-      {view.source === 'links' && (canGroup && grouping === 'target'
-        ? <LinkTargetTable key={kind.id} {...props} />
-        : <LinkFindingsTable key={kind.id} {...props} />)}
+      {view.source === 'links' &&
+        (canGroup && grouping === 'target' ? <LinkTargetTable key={kind.id} {...props} /> : <LinkFindingsTable key={kind.id} {...props} />)}
     </Box>
   );
 }

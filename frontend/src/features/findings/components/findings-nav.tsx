@@ -21,14 +21,30 @@ export function FindingsNav({ docSetId, current, counts, loading, search }: Find
       <List disablePadding>
         {FINDINGS_VIEWS.map((view) => {
           const total = counts ? viewCount(view, counts) : null;
-          const detail = counts && view.kinds.length > 1 ? view.kinds.map((k) => `${nf.format(k.count(counts))} ${k.label.toLowerCase()}`).join(' · ') : undefined;
+          const detail =
+            counts && view.kinds.length > 1
+              ? view.kinds.map((k) => `${nf.format(k.count(counts))} ${k.label.toLowerCase()}`).join(' · ')
+              : undefined;
           return (
-            <ListItemButton key={view.id} component={RouterLink} selected={view.id === current}
+            <ListItemButton
+              key={view.id}
+              component={RouterLink}
+              selected={view.id === current}
               aria-current={view.id === current ? 'page' : undefined}
-              to={`/doc-sets/${encodeURIComponent(docSetId)}/findings/${view.id}${search}`}>
+              to={`/doc-sets/${encodeURIComponent(docSetId)}/findings/${view.id}${search}`}
+            >
               <ListItemText primary={view.label} secondary={detail} />
-              {loading ? <Skeleton width={28} /> : total !== null && (
-                <Chip size="small" label={nf.format(total)} color={total > 0 ? 'secondary' : 'default'} aria-label={`${nf.format(total)} found`} />
+              {loading ? (
+                <Skeleton width={28} />
+              ) : (
+                total !== null && (
+                  <Chip
+                    size="small"
+                    label={nf.format(total)}
+                    color={total > 0 ? 'secondary' : 'default'}
+                    aria-label={`${nf.format(total)} found`}
+                  />
+                )
               )}
             </ListItemButton>
           );

@@ -28,7 +28,9 @@ const n = (v: number | undefined) => v ?? 0;
 
 export const FINDINGS_VIEWS: FindingsView[] = [
   {
-    id: 'needs-links', label: 'Pages that need links', source: 'pages',
+    id: 'needs-links',
+    label: 'Pages that need links',
+    source: 'pages',
     need: 'Readers cannot find these pages by clicking: link to them from related, well-visited pages.',
     kinds: [
       { id: 'orphan', label: 'Orphans', flag: 'orphan', count: (c) => c.orphans },
@@ -37,12 +39,16 @@ export const FINDINGS_VIEWS: FindingsView[] = [
     ],
   },
   {
-    id: 'dead-ends', label: 'Dead ends', source: 'pages',
+    id: 'dead-ends',
+    label: 'Dead ends',
+    source: 'pages',
     need: 'These pages link to no other page, so the reader is stranded: add a link onwards.',
     kinds: [{ id: 'dead-end', label: 'Dead ends', flag: 'dead-end', count: (c) => c.deadEnds }],
   },
   {
-    id: 'broken-links', label: 'Broken links and anchors', source: 'links',
+    id: 'broken-links',
+    label: 'Broken links and anchors',
+    source: 'links',
     need: 'Links to a page, file or heading that is not there: repair or remove them.',
     kinds: [
       { id: 'broken', label: 'Missing target', status: 'broken', count: (c) => c.brokenLinks },
@@ -50,7 +56,9 @@ export const FINDINGS_VIEWS: FindingsView[] = [
     ],
   },
   {
-    id: 'unsafe-ambiguous', label: 'Unsafe and ambiguous links', source: 'links',
+    id: 'unsafe-ambiguous',
+    label: 'Unsafe and ambiguous links',
+    source: 'links',
     need: 'Unsafe links run code or embed data when clicked; ambiguous wiki links match more than one page.',
     kinds: [
       { id: 'unsafe', label: 'Unsafe', status: 'unsafe', count: (c) => n(c.unsafeLinks) },
@@ -58,7 +66,9 @@ export const FINDINGS_VIEWS: FindingsView[] = [
     ],
   },
   {
-    id: 'islands', label: 'Islands', source: 'islands',
+    id: 'islands',
+    label: 'Islands',
+    source: 'islands',
     need: 'Groups of pages linked among themselves but cut off from the entry pages: link one of them from the main tree.',
     kinds: [{ id: 'island', label: 'Islands', count: (c) => c.islands }],
   },
@@ -89,10 +99,15 @@ export function viewCount(view: FindingsView, counts: RunFindingCounts): number 
 /** Why a page is listed under a pages view, in a sentence a writer can act on. */
 export function pageReason(row: PageRow, flag: PageFlag | undefined): string {
   switch (flag) {
-    case 'orphan': return 'No other page links here.';
-    case 'unreachable': return 'No chain of links leads here from an entry page.';
-    case 'deep': return `${row.depth ?? '?'} clicks from the nearest entry page.`;
-    case 'dead-end': return `Links to no other page${row.brokenLinkCount ? `; ${row.brokenLinkCount} broken link(s) do not count` : ''}.`;
-    default: return '';
+    case 'orphan':
+      return 'No other page links here.';
+    case 'unreachable':
+      return 'No chain of links leads here from an entry page.';
+    case 'deep':
+      return `${row.depth ?? '?'} clicks from the nearest entry page.`;
+    case 'dead-end':
+      return `Links to no other page${row.brokenLinkCount ? `; ${row.brokenLinkCount} broken link(s) do not count` : ''}.`;
+    default:
+      return '';
   }
 }

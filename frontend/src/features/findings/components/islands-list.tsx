@@ -13,24 +13,36 @@ export function IslandsList({ docSetId, runId }: { docSetId: string; runId: stri
   if (islands.isLoading) return <LoadingSkeleton />;
   if (islands.error) return <ErrorPanel error={islands.error} onRetry={() => islands.refetch()} />;
   const items = [...(islands.data?.items ?? [])].sort((a, b) => b.size - a.size);
-  if (items.length === 0) return <EmptyState title="No islands" hint="Every page is connected to the entry pages' part of the link graph." />;
+  if (items.length === 0)
+    return <EmptyState title="No islands" hint="Every page is connected to the entry pages' part of the link graph." />;
   return (
     <div>
       {items.map((island, i) => (
         <Accordion key={island.islandId} disableGutters defaultExpanded={i === 0}>
           <AccordionSummary expandIcon={<ExpandMoreOutlined />}>
-            <Typography>Island {i + 1}: {island.size} page{island.size === 1 ? '' : 's'}</Typography>
+            <Typography>
+              Island {i + 1}: {island.size} page{island.size === 1 ? '' : 's'}
+            </Typography>
           </AccordionSummary>
           <AccordionDetails>
             <List dense disablePadding>
               {island.pages.map((p) => (
                 <ListItem key={p.path} disableGutters>
-                  <ListItemText primary={<Link component={RouterLink} to={pageDetailHref(docSetId, p.path, runId)}>{p.title || p.path}</Link>} secondary={p.path} />
+                  <ListItemText
+                    primary={
+                      <Link component={RouterLink} to={pageDetailHref(docSetId, p.path, runId)}>
+                        {p.title || p.path}
+                      </Link>
+                    }
+                    secondary={p.path}
+                  />
                 </ListItem>
               ))}
             </List>
             {island.pages.length < island.size && (
-              <Typography variant="caption" color="text.secondary">Showing {island.pages.length} of {island.size} pages.</Typography>
+              <Typography variant="caption" color="text.secondary">
+                Showing {island.pages.length} of {island.size} pages.
+              </Typography>
             )}
           </AccordionDetails>
         </Accordion>

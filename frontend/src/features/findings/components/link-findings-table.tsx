@@ -18,17 +18,51 @@ export const linkId = (l: LinkRow) => `${l.sourcePath}:${l.line}:${l.column}`;
 function columns(docSetId: string, runId: string): ColumnDef<LinkRow>[] {
   return [
     {
-      id: 'sourcePath', header: 'On page', accessorKey: 'sourcePath', enableHiding: false,
-      cell: ({ row }) => <Link component={RouterLink} to={pageDetailHref(docSetId, row.original.sourcePath, runId)}>{row.original.sourcePath}</Link>,
+      id: 'sourcePath',
+      header: 'On page',
+      accessorKey: 'sourcePath',
+      enableHiding: false,
+      cell: ({ row }) => (
+        <Link component={RouterLink} to={pageDetailHref(docSetId, row.original.sourcePath, runId)}>
+          {row.original.sourcePath}
+        </Link>
+      ),
     },
-    { id: 'line', header: 'Line:col', enableSorting: false, accessorKey: 'line', cell: ({ row }) => `${row.original.line}:${row.original.column}`, meta: { align: 'right' } },
-    // Unsafe hrefs arrive as null or as text and are only ever shown as text: never an <a>.
-    { id: 'href', header: 'Link as written', enableSorting: false, cell: ({ row }) => <RawHref href={row.original.href ?? row.original.hrefText} /> },
-    { id: 'targetPath', header: 'Resolves to', enableSorting: false, accessorKey: 'targetPath', cell: ({ row }) => row.original.targetPath ? `${row.original.targetPath}${row.original.anchor ? `#${row.original.anchor}` : ''}` : '—' },
     {
-      id: 'status', header: 'Problem', enableSorting: false,
-      cell: ({ row }) => (<><Chip size="small" label={row.original.status} sx={{ mr: 1 }} />
-        <Typography variant="body2" component="span">{row.original.reason ?? ''}</Typography></>),
+      id: 'line',
+      header: 'Line:col',
+      enableSorting: false,
+      accessorKey: 'line',
+      cell: ({ row }) => `${row.original.line}:${row.original.column}`,
+      meta: { align: 'right' },
+    },
+    // Unsafe hrefs arrive as null or as text and are only ever shown as text: never an <a>.
+    {
+      id: 'href',
+      header: 'Link as written',
+      enableSorting: false,
+      cell: ({ row }) => <RawHref href={row.original.href ?? row.original.hrefText} />,
+    },
+    {
+      id: 'targetPath',
+      header: 'Resolves to',
+      enableSorting: false,
+      accessorKey: 'targetPath',
+      cell: ({ row }) =>
+        row.original.targetPath ? `${row.original.targetPath}${row.original.anchor ? `#${row.original.anchor}` : ''}` : '—',
+    },
+    {
+      id: 'status',
+      header: 'Problem',
+      enableSorting: false,
+      cell: ({ row }) => (
+        <>
+          <Chip size="small" label={row.original.status} sx={{ mr: 1 }} />
+          <Typography variant="body2" component="span">
+            {row.original.reason ?? ''}
+          </Typography>
+        </>
+      ),
     },
   ];
 }
@@ -40,21 +74,48 @@ export function LinkFindingsTable({ docSetId, runId, kind, table, label }: Findi
   const links = useLinks(docSetId, runId, { status, page: table.page, pageSize: table.pageSize, sort: table.sort });
   const selection = useRowSelection(linkId);
   const cols = useMemo(() => columns(docSetId, runId), [docSetId, runId]);
-  const exportSelected = () => downloadCsv(`${status}-links.csv`, toCsv(
-    ['sourcePath', 'line', 'column', 'href', 'targetPath', 'anchor', 'status', 'reason'],
-    selection.rows.map((l) => [l.sourcePath, l.line, l.column, l.href ?? '', l.targetPath, l.anchor, l.status, l.reason]),
-  ));
+  const exportSelected = () =>
+    downloadCsv(
+      `${status}-links.csv`,
+      toCsv(
+        ['sourcePath', 'line', 'column', 'href', 'targetPath', 'anchor', 'status', 'reason'],
+        selection.rows.map((l) => [l.sourcePath, l.line, l.column, l.href ?? '', l.targetPath, l.anchor, l.status, l.reason]),
+      ),
+    );
   const pagePaths = [...new Set(selection.rows.map((l) => l.sourcePath))];
   return (
     <>
-      <BulkActionBar count={selection.ids.length} onExport={exportSelected} onClear={selection.clear}
-        taskRequest={{ pagePaths, kind: 'repair-broken-links' }} />
-      <DataTable label={label} columns={cols} data={links.data?.items} total={links.data?.total ?? 0}
-        page={table.page} pageSize={table.pageSize} sort={table.sort}
-        onPageChange={table.onPageChange} onPageSizeChange={table.onPageSizeChange} onSortChange={table.onSortChange}
-        loading={links.isFetching} error={links.error} onRetry={() => links.refetch()} rowId={linkId}
-        selectable selectedIds={selection.ids} onSelectionChange={(ids) => selection.onSelectionChange(ids, links.data?.items ?? [])}
-        emptyState={<EmptyState title={`No ${kind.label.toLowerCase()} links in this run`} hint="Nothing to fix here. Check the other views in the list." />} />
+      <BulkActionBar
+        count={selection.ids.length}
+        onExport={exportSelected}
+        onClear={selection.clear}
+        taskRequest={{ pagePaths, kind: 'repair-broken-links' }}
+      />
+      <DataTable
+        label={label}
+        columns={cols}
+        data={links.data?.items}
+        total={links.data?.total ?? 0}
+        page={table.page}
+        pageSize={table.pageSize}
+        sort={table.sort}
+        onPageChange={table.onPageChange}
+        onPageSizeChange={table.onPageSizeChange}
+        onSortChange={table.onSortChange}
+        loading={links.isFetching}
+        error={links.error}
+        onRetry={() => links.refetch()}
+        rowId={linkId}
+        selectable
+        selectedIds={selection.ids}
+        onSelectionChange={(ids) => selection.onSelectionChange(ids, links.data?.items ?? [])}
+        emptyState={
+          <EmptyState
+            title={`No ${kind.label.toLowerCase()} links in this run`}
+            hint="Nothing to fix here. Check the other views in the list."
+          />
+        }
+      />
     </>
   );
 }

@@ -16,14 +16,27 @@ const sourcePage = (s: GroupSource) => (typeof s === 'string' ? s.replace(/:\d+(
 const SHOWN_SOURCES = 3;
 
 const COLUMNS: ColumnDef<LinkTargetGroup>[] = [
-  { id: 'target', header: 'Missing target', enableHiding: false, enableSorting: false, cell: ({ row }) => <RawHref href={targetId(row.original)} /> },
+  {
+    id: 'target',
+    header: 'Missing target',
+    enableHiding: false,
+    enableSorting: false,
+    cell: ({ row }) => <RawHref href={targetId(row.original)} />,
+  },
   { id: 'count', header: 'Links', accessorKey: 'count', meta: { align: 'right', sortDescFirst: true } },
   {
-    id: 'sources', header: 'From pages (page:line)', enableSorting: false,
+    id: 'sources',
+    header: 'From pages (page:line)',
+    enableSorting: false,
     cell: ({ row }) => {
       const { sources, count } = row.original;
       const more = Math.max(count, sources.length) - Math.min(sources.length, SHOWN_SOURCES);
-      return <Typography variant="body2">{sources.slice(0, SHOWN_SOURCES).map(sourceText).join(', ')}{more > 0 ? ` and ${more} more` : ''}</Typography>;
+      return (
+        <Typography variant="body2">
+          {sources.slice(0, SHOWN_SOURCES).map(sourceText).join(', ')}
+          {more > 0 ? ` and ${more} more` : ''}
+        </Typography>
+      );
     },
   },
 ];
@@ -33,20 +46,43 @@ export function LinkTargetTable({ docSetId, runId, kind, table, label }: Finding
   const status = kind.status as LinkStatus;
   const groups = useLinksByTarget(docSetId, runId, { status, page: table.page, pageSize: table.pageSize, sort: table.sort });
   const selection = useRowSelection(targetId);
-  const exportSelected = () => downloadCsv(`${status}-targets.csv`, toCsv(
-    ['target', 'count', 'sources'], selection.rows.map((g) => [targetId(g), g.count, g.sources.map(sourceText).join(' ')]),
-  ));
+  const exportSelected = () =>
+    downloadCsv(
+      `${status}-targets.csv`,
+      toCsv(
+        ['target', 'count', 'sources'],
+        selection.rows.map((g) => [targetId(g), g.count, g.sources.map(sourceText).join(' ')]),
+      ),
+    );
   const pagePaths = [...new Set(selection.rows.flatMap((g) => g.sources.map(sourcePage)))];
   return (
     <>
-      <BulkActionBar count={selection.ids.length} onExport={exportSelected} onClear={selection.clear}
-        taskRequest={{ pagePaths, kind: 'repair-broken-links' }} />
-      <DataTable label={label} columns={COLUMNS} data={groups.data?.items} total={groups.data?.total ?? 0}
-        page={table.page} pageSize={table.pageSize} sort={table.sort}
-        onPageChange={table.onPageChange} onPageSizeChange={table.onPageSizeChange} onSortChange={table.onSortChange}
-        loading={groups.isFetching} error={groups.error} onRetry={() => groups.refetch()} rowId={targetId}
-        selectable selectedIds={selection.ids} onSelectionChange={(ids) => selection.onSelectionChange(ids, groups.data?.items ?? [])}
-        emptyState={<EmptyState title="No missing targets in this run" hint="Nothing to fix here. Check the other views in the list." />} />
+      <BulkActionBar
+        count={selection.ids.length}
+        onExport={exportSelected}
+        onClear={selection.clear}
+        taskRequest={{ pagePaths, kind: 'repair-broken-links' }}
+      />
+      <DataTable
+        label={label}
+        columns={COLUMNS}
+        data={groups.data?.items}
+        total={groups.data?.total ?? 0}
+        page={table.page}
+        pageSize={table.pageSize}
+        sort={table.sort}
+        onPageChange={table.onPageChange}
+        onPageSizeChange={table.onPageSizeChange}
+        onSortChange={table.onSortChange}
+        loading={groups.isFetching}
+        error={groups.error}
+        onRetry={() => groups.refetch()}
+        rowId={targetId}
+        selectable
+        selectedIds={selection.ids}
+        onSelectionChange={(ids) => selection.onSelectionChange(ids, groups.data?.items ?? [])}
+        emptyState={<EmptyState title="No missing targets in this run" hint="Nothing to fix here. Check the other views in the list." />}
+      />
     </>
   );
 }

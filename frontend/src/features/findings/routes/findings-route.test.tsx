@@ -9,24 +9,88 @@ import FindingsRoute from './findings-route.js';
 afterEach(() => vi.unstubAllGlobals());
 
 const COUNTS = {
-  pages: 80, links: 600, internalLinks: 500, externalLinks: 100, brokenLinks: 6, brokenAnchors: 2, brokenAssets: 1,
-  unsafeLinks: 1, ambiguousLinks: 2, redirectedLinks: 0, outOfScopeLinks: 0, orphans: 4, deadEnds: 3, unreachable: 2, deepPages: 5, islands: 1,
+  pages: 80,
+  links: 600,
+  internalLinks: 500,
+  externalLinks: 100,
+  brokenLinks: 6,
+  brokenAnchors: 2,
+  brokenAssets: 1,
+  unsafeLinks: 1,
+  ambiguousLinks: 2,
+  redirectedLinks: 0,
+  outOfScopeLinks: 0,
+  orphans: 4,
+  deadEnds: 3,
+  unreachable: 2,
+  deepPages: 5,
+  islands: 1,
 };
 
 function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest': () => ({ body: { id: 'r7', status: 'finished', counts: COUNTS } }),
     'GET /api/doc-sets/d1/runs/latest/pages': (url) => ({
-      body: url.searchParams.get('flags') === 'deep'
-        ? { items: [pageRow('gears/hub-service.md', { deep: true, depth: 6 })], total: 1, page: 1, pageSize: 50 }
-        : { items: [pageRow('gears/cables.md', { orphan: true, inboundCount: 0 })], total: 1, page: 1, pageSize: 50 },
+      body:
+        url.searchParams.get('flags') === 'deep'
+          ? { items: [pageRow('gears/hub-service.md', { deep: true, depth: 6 })], total: 1, page: 1, pageSize: 50 }
+          : { items: [pageRow('gears/cables.md', { orphan: true, inboundCount: 0 })], total: 1, page: 1, pageSize: 50 },
     }),
     'GET /api/doc-sets/d1/runs/latest/links': (url) => ({
-      body: url.searchParams.get('groupBy') === 'target'
-        ? { items: [{ targetPath: 'gears/derailleur.md', count: 2, sources: [{ sourcePath: 'index.md', line: 4 }, { sourcePath: 'gears/cables.md', line: 9 }] }], total: 1, page: 1, pageSize: 50 }
-        : url.searchParams.get('status') === 'unsafe'
-          ? { items: [{ sourcePath: 'tools.md', line: 12, column: 3, href: 'javascript:alert(1)', targetPath: null, anchor: null, kind: 'inline', status: 'unsafe', reason: 'Runs script when clicked' }], total: 1, page: 1, pageSize: 50 }
-          : { items: [{ sourcePath: 'index.md', line: 4, column: 7, href: './gears/derailleur.md', targetPath: 'gears/derailleur.md', anchor: null, kind: 'inline', status: 'broken', reason: 'No such page' }], total: 1, page: 1, pageSize: 50 },
+      body:
+        url.searchParams.get('groupBy') === 'target'
+          ? {
+              items: [
+                {
+                  targetPath: 'gears/derailleur.md',
+                  count: 2,
+                  sources: [
+                    { sourcePath: 'index.md', line: 4 },
+                    { sourcePath: 'gears/cables.md', line: 9 },
+                  ],
+                },
+              ],
+              total: 1,
+              page: 1,
+              pageSize: 50,
+            }
+          : url.searchParams.get('status') === 'unsafe'
+            ? {
+                items: [
+                  {
+                    sourcePath: 'tools.md',
+                    line: 12,
+                    column: 3,
+                    href: 'javascript:alert(1)',
+                    targetPath: null,
+                    anchor: null,
+                    kind: 'inline',
+                    status: 'unsafe',
+                    reason: 'Runs script when clicked',
+                  },
+                ],
+                total: 1,
+                page: 1,
+                pageSize: 50,
+              }
+            : {
+                items: [
+                  {
+                    sourcePath: 'index.md',
+                    line: 4,
+                    column: 7,
+                    href: './gears/derailleur.md',
+                    targetPath: 'gears/derailleur.md',
+                    anchor: null,
+                    kind: 'inline',
+                    status: 'broken',
+                    reason: 'No such page',
+                  },
+                ],
+                total: 1,
+                page: 1,
+                pageSize: 50,
+              },
     }),
   });
 }

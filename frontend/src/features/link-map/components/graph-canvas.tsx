@@ -22,16 +22,31 @@ const STYLE: StylesheetJson = [
   {
     selector: 'node',
     style: {
-      width: 'data(size)', height: 'data(size)', 'background-color': 'data(colour)', label: 'data(label)',
-      'font-size': 11, color: '#1C2629', 'text-valign': 'bottom', 'text-margin-y': 4, 'text-wrap': 'ellipsis',
-      'text-max-width': '140px', 'border-width': 1, 'border-color': '#FFFFFF', 'min-zoomed-font-size': 7,
+      width: 'data(size)',
+      height: 'data(size)',
+      'background-color': 'data(colour)',
+      label: 'data(label)',
+      'font-size': 11,
+      color: '#1C2629',
+      'text-valign': 'bottom',
+      'text-margin-y': 4,
+      'text-wrap': 'ellipsis',
+      'text-max-width': '140px',
+      'border-width': 1,
+      'border-color': '#FFFFFF',
+      'min-zoomed-font-size': 7,
     },
   },
   {
     selector: 'edge',
     style: {
-      width: 'data(width)', 'line-color': '#9FB5BA', 'target-arrow-color': '#9FB5BA', 'target-arrow-shape': 'triangle',
-      'curve-style': 'bezier', 'arrow-scale': 0.8, opacity: 0.8,
+      width: 'data(width)',
+      'line-color': '#9FB5BA',
+      'target-arrow-color': '#9FB5BA',
+      'target-arrow-shape': 'triangle',
+      'curve-style': 'bezier',
+      'arrow-scale': 0.8,
+      opacity: 0.8,
     },
   },
   { selector: 'node.highlight', style: { 'border-width': 4, 'border-color': '#E8893A', 'z-index': 10 } },
@@ -52,8 +67,14 @@ export function GraphCanvas({ elements, layout, onNodeOpen, highlightId, height 
   useEffect(() => {
     if (!container.current) return undefined;
     const cy = cytoscape({
-      container: container.current, elements, style: STYLE, layout,
-      minZoom: 0.1, maxZoom: 4, wheelSensitivity: 0.3, boxSelectionEnabled: false,
+      container: container.current,
+      elements,
+      style: STYLE,
+      layout,
+      minZoom: 0.1,
+      maxZoom: 4,
+      wheelSensitivity: 0.3,
+      boxSelectionEnabled: false,
     });
     cy.on('tap', 'node', (event) => openRef.current(String(event.target.id())));
     cyRef.current = cy;
@@ -80,9 +101,21 @@ export function GraphCanvas({ elements, layout, onNodeOpen, highlightId, height 
     <Paper variant="outlined" sx={{ position: 'relative', overflow: 'hidden' }}>
       <Box ref={container} role="img" aria-label={label} sx={{ height, width: '100%', bgcolor: 'background.default' }} />
       <Stack sx={{ position: 'absolute', top: 8, right: 8, bgcolor: 'background.paper', borderRadius: 1, boxShadow: 1 }}>
-        <Tooltip title="Zoom in" placement="left"><IconButton aria-label="Zoom in" size="small" onClick={act((cy) => zoomBy(cy, 1.25))}><ZoomInOutlined fontSize="small" /></IconButton></Tooltip>
-        <Tooltip title="Zoom out" placement="left"><IconButton aria-label="Zoom out" size="small" onClick={act((cy) => zoomBy(cy, 0.8))}><ZoomOutOutlined fontSize="small" /></IconButton></Tooltip>
-        <Tooltip title="Fit the whole picture" placement="left"><IconButton aria-label="Fit the whole picture" size="small" onClick={act((cy) => cy.fit(undefined, 24))}><CenterFocusStrongOutlined fontSize="small" /></IconButton></Tooltip>
+        <Tooltip title="Zoom in" placement="left">
+          <IconButton aria-label="Zoom in" size="small" onClick={act((cy) => zoomBy(cy, 1.25))}>
+            <ZoomInOutlined fontSize="small" />
+          </IconButton>
+        </Tooltip>
+        <Tooltip title="Zoom out" placement="left">
+          <IconButton aria-label="Zoom out" size="small" onClick={act((cy) => zoomBy(cy, 0.8))}>
+            <ZoomOutOutlined fontSize="small" />
+          </IconButton>
+        </Tooltip>
+        <Tooltip title="Fit the whole picture" placement="left">
+          <IconButton aria-label="Fit the whole picture" size="small" onClick={act((cy) => cy.fit(undefined, 24))}>
+            <CenterFocusStrongOutlined fontSize="small" />
+          </IconButton>
+        </Tooltip>
       </Stack>
     </Paper>
   );

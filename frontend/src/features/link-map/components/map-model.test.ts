@@ -8,7 +8,10 @@ const graph: MapGraph = {
     { id: 'guides', label: 'guides', path: 'guides', size: 40, stationaryScore: 0.6, pageCount: 40, flags: [] },
     { id: 'archive', label: 'archive', path: 'archive', size: 5, stationaryScore: 0.1, pageCount: 5, flags: ['orphan'] },
   ],
-  edges: [{ source: 'guides', target: 'archive', weight: 1 }, { source: 'archive', target: 'gone', weight: 3 }],
+  edges: [
+    { source: 'guides', target: 'archive', weight: 1 },
+    { source: 'archive', target: 'gone', weight: 3 },
+  ],
 };
 
 describe('link map model', () => {

@@ -29,7 +29,10 @@ export function mapElements(graph: MapGraph): MapElement[] {
     })),
     ...graph.edges
       .filter((e) => ids.has(e.source) && ids.has(e.target) && e.source !== e.target)
-      .map((e): MapElement => ({ group: 'edges', data: { id: `${e.source}→${e.target}`, source: e.source, target: e.target, width: edgeWidth(e.weight, maxWeight) } })),
+      .map((e): MapElement => ({
+        group: 'edges',
+        data: { id: `${e.source}→${e.target}`, source: e.source, target: e.target, width: edgeWidth(e.weight, maxWeight) },
+      })),
   ];
 }
 

@@ -38,30 +38,45 @@ export default function LinkMapRoute() {
     else navigate(pageDetailHref(docSetId, node.path, runId));
   };
 
-  const header = <PageHeader title="Link map" subtitle="The doc set's link graph. Large doc sets start with one circle per folder; click a folder to open it, a page to see its detail." />;
-  if (run.error && isNoAnalysis(run.error)) return <>{header}<NoAnalysisYet docSetId={docSetId} /></>;
+  const header = (
+    <PageHeader
+      title="Link map"
+      subtitle="The doc set's link graph. Large doc sets start with one circle per folder; click a folder to open it, a page to see its detail."
+    />
+  );
+  if (run.error && isNoAnalysis(run.error))
+    return (
+      <>
+        {header}
+        <NoAnalysisYet docSetId={docSetId} />
+      </>
+    );
   let body;
   if (graph.isLoading) body = <LoadingSkeleton variant="chart" />;
   else if (graph.error && isNoAnalysis(graph.error)) {
     body = (
       <Alert severity="info" variant="outlined">
         <AlertTitle>The link map is not available yet</AlertTitle>
-        This server does not draw link maps yet. Meanwhile, each page's detail shows its neighbourhood picture, and the Pages list sorts by score.
+        This server does not draw link maps yet. Meanwhile, each page's detail shows its neighbourhood picture, and the Pages list sorts by
+        score.
       </Alert>
     );
   } else if (graph.error) body = <ErrorPanel error={graph.error} onRetry={() => graph.refetch()} />;
-  else if (nodes.length === 0) body = <EmptyState title="Nothing to draw here" hint="This folder holds no pages. Go back up with the breadcrumb." />;
+  else if (nodes.length === 0)
+    body = <EmptyState title="Nothing to draw here" hint="This folder holds no pages. Go back up with the breadcrumb." />;
   else {
     body = (
       <Stack spacing={1.5}>
         {nodes.length >= state.limit && (
           <Alert severity="warning" variant="outlined">
-            The map shows the {state.limit} highest-scored {graph.data?.level === 'folders' ? 'folders' : 'pages'} only. Open a folder, or raise "Most nodes", to see more.
+            The map shows the {state.limit} highest-scored {graph.data?.level === 'folders' ? 'folders' : 'pages'} only. Open a folder, or
+            raise "Most nodes", to see more.
           </Alert>
         )}
         <Stack direction="row" sx={{ alignItems: 'center', gap: 2 }}>
           <Typography variant="body2" color="text.secondary" sx={{ flex: 1 }}>
-            {nodes.length} {graph.data?.level === 'folders' ? 'folders' : 'pages'}{state.folder ? ` in ${state.folder}` : ''}. Drag to pan, scroll or use the buttons to zoom.
+            {nodes.length} {graph.data?.level === 'folders' ? 'folders' : 'pages'}
+            {state.folder ? ` in ${state.folder}` : ''}. Drag to pan, scroll or use the buttons to zoom.
           </Typography>
           <ToggleButtonGroup size="small" exclusive value={view} onChange={(_, v) => v && setView(v)} aria-label="Show the map as">
             <ToggleButton value="picture">Picture</ToggleButton>
@@ -70,14 +85,26 @@ export default function LinkMapRoute() {
         </Stack>
         {view === 'picture' ? (
           <>
-            <GraphCanvas elements={elements} layout={LAYOUT} onNodeOpen={open} highlightId={highlight} height={620}
-              label={`Link map of ${nodes.length} nodes; the List view holds the same nodes`} />
-            <FindingLegend sizeNote={graph.data?.level === 'folders'
-              ? 'Larger circles hold more stationary score; thicker lines carry more links.'
-              : 'Larger circles have a higher stationary score.'} />
+            <GraphCanvas
+              elements={elements}
+              layout={LAYOUT}
+              onNodeOpen={open}
+              highlightId={highlight}
+              height={620}
+              label={`Link map of ${nodes.length} nodes; the List view holds the same nodes`}
+            />
+            <FindingLegend
+              sizeNote={
+                graph.data?.level === 'folders'
+                  ? 'Larger circles hold more stationary score; thicker lines carry more links.'
+                  : 'Larger circles have a higher stationary score.'
+              }
+            />
           </>
         ) : (
-          <Paper variant="outlined"><MapNodeList nodes={nodes} docSetId={docSetId} runId={runId} onOpenFolder={(folder) => setState({ folder })} /></Paper>
+          <Paper variant="outlined">
+            <MapNodeList nodes={nodes} docSetId={docSetId} runId={runId} onOpenFolder={(folder) => setState({ folder })} />
+          </Paper>
         )}
       </Stack>
     );
@@ -85,9 +112,21 @@ export default function LinkMapRoute() {
   return (
     <>
       {header}
-      <MapToolbar folder={state.folder} folderDepth={state.folderDepth} limit={state.limit}
-        onChange={(patch) => { setHighlight(null); setState(patch); }}
-        onFind={(words) => { const node = findNode(nodes, words); setHighlight(node?.id ?? null); if (node) setView('picture'); return node !== null; }} />
+      <MapToolbar
+        folder={state.folder}
+        folderDepth={state.folderDepth}
+        limit={state.limit}
+        onChange={(patch) => {
+          setHighlight(null);
+          setState(patch);
+        }}
+        onFind={(words) => {
+          const node = findNode(nodes, words);
+          setHighlight(node?.id ?? null);
+          if (node) setView('picture');
+          return node !== null;
+        }}
+      />
       {body}
     </>
   );

@@ -21,7 +21,12 @@ export interface OutboxMessage {
   sentAt: string | null;
 }
 
-export function getOutbox(status: OutboxStatus | '', page: number, pageSize: number, signal?: AbortSignal): Promise<ListResult<OutboxMessage>> {
+export function getOutbox(
+  status: OutboxStatus | '',
+  page: number,
+  pageSize: number,
+  signal?: AbortSignal,
+): Promise<ListResult<OutboxMessage>> {
   return apiFetch<ListResult<OutboxMessage>>('/outbox', { query: { status, page, pageSize }, signal });
 }
 

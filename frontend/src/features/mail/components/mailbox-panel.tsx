@@ -30,22 +30,42 @@ export function MailboxPanel({ page, pageSize, onPageChange, onPageSizeChange }:
     return (
       <Alert severity="info" variant="outlined">
         <AlertTitle>The local mailbox is off</AlertTitle>
-        Linkloom sends mail through the server named in SMTP_URL, so messages are read in that mail system.
-        The Delivery tab still shows whether each one was sent.
+        Linkloom sends mail through the server named in SMTP_URL, so messages are read in that mail system. The Delivery tab still shows
+        whether each one was sent.
       </Alert>
     );
   }
 
   return (
     <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1fr) minmax(0, 1fr)' }, alignItems: 'start' }}>
-      <DataTable label="Caught messages" columns={columns} data={mailbox.data?.items} total={mailbox.data?.total ?? 0}
-        page={page} pageSize={pageSize} sort="" onSortChange={() => undefined}
-        onPageChange={onPageChange} onPageSizeChange={onPageSizeChange}
-        loading={mailbox.isLoading} error={mailbox.error} onRetry={() => mailbox.refetch()} rowId={(m) => m.id}
+      <DataTable
+        label="Caught messages"
+        columns={columns}
+        data={mailbox.data?.items}
+        total={mailbox.data?.total ?? 0}
+        page={page}
+        pageSize={pageSize}
+        sort=""
+        onSortChange={() => undefined}
+        onPageChange={onPageChange}
+        onPageSizeChange={onPageSizeChange}
+        loading={mailbox.isLoading}
+        error={mailbox.error}
+        onRetry={() => mailbox.refetch()}
+        rowId={(m) => m.id}
         onRowClick={(m) => setOpenId(m.id)}
-        toolbar={<Typography variant="body2" color="text.secondary">Click a message or press Enter on it to read it.</Typography>}
-        emptyState={<EmptyState title="No mail caught yet"
-          hint="Messages appear here once Linkloom sends one, e.g. a nightly digest or a task assignment. On the Delivery tab, “Send due mail now” sends what is waiting." />} />
+        toolbar={
+          <Typography variant="body2" color="text.secondary">
+            Click a message or press Enter on it to read it.
+          </Typography>
+        }
+        emptyState={
+          <EmptyState
+            title="No mail caught yet"
+            hint="Messages appear here once Linkloom sends one, e.g. a nightly digest or a task assignment. On the Delivery tab, “Send due mail now” sends what is waiting."
+          />
+        }
+      />
       <MessageReader key={openId ?? 'none'} messageId={openId} />
     </Box>
   );

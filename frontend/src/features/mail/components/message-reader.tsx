@@ -25,17 +25,32 @@ export function MessageReader({ messageId }: { messageId: string | null }) {
   return (
     <Paper variant="outlined" component="article" aria-label="Message" sx={{ p: 2 }}>
       <Stack spacing={1}>
-        <Typography variant="h3" component="h2" sx={{ wordBreak: 'break-word' }}>{data.subject || '(no subject)'}</Typography>
+        <Typography variant="h3" component="h2" sx={{ wordBreak: 'break-word' }}>
+          {data.subject || '(no subject)'}
+        </Typography>
         <Typography variant="body2" color="text.secondary">
           From {data.from || 'unknown'} · to {data.to.join(', ') || 'nobody'} · {new Date(data.receivedAt).toLocaleString()}
         </Typography>
-        <ToggleButtonGroup size="small" exclusive value={view} onChange={(_, next: View | null) => next && setView(next)} aria-label="Show message as">
+        <ToggleButtonGroup
+          size="small"
+          exclusive
+          value={view}
+          onChange={(_, next: View | null) => next && setView(next)}
+          aria-label="Show message as"
+        >
           <ToggleButton value="text">Plain text</ToggleButton>
-          <ToggleButton value="html" disabled={!data.html}>HTML</ToggleButton>
+          <ToggleButton value="html" disabled={!data.html}>
+            HTML
+          </ToggleButton>
         </ToggleButtonGroup>
         {view === 'html' && data.html ? (
-          <Box component="iframe" title={`HTML of “${data.subject}”`} sandbox="" srcDoc={data.html}
-            sx={{ width: '100%', height: 480, border: 1, borderColor: 'divider', borderRadius: 1, bgcolor: '#fff' }} />
+          <Box
+            component="iframe"
+            title={`HTML of “${data.subject}”`}
+            sandbox=""
+            srcDoc={data.html}
+            sx={{ width: '100%', height: 480, border: 1, borderColor: 'divider', borderRadius: 1, bgcolor: '#fff' }}
+          />
         ) : (
           <Box component="pre" sx={{ whiteSpace: 'pre-wrap', wordBreak: 'break-word', m: 0, fontFamily: 'monospace', fontSize: 13 }}>
             {data.text || '(this message has no plain-text part; switch to HTML)'}

@@ -9,16 +9,44 @@ afterEach(() => vi.unstubAllGlobals());
 
 const hostileSubject = '<img src=x onerror="window.__mailPwned=1">';
 const hostileHtml = '<p>Digest for Harbour Guides</p><script>window.__mailPwned=2</script><img src=x onerror="window.__mailPwned=3">';
-const summary = { id: 'm1', messageId: '<m1@linkloom.local>', from: 'linkloom@example.com', to: ['rita@example.com'], subject: hostileSubject, receivedAt: '2026-11-30T02:10:00Z' };
+const summary = {
+  id: 'm1',
+  messageId: '<m1@linkloom.local>',
+  from: 'linkloom@example.com',
+  to: ['rita@example.com'],
+  subject: hostileSubject,
+  receivedAt: '2026-11-30T02:10:00Z',
+};
 
 function api(mailbox: () => { status?: number; body?: unknown } = () => ({ body: { items: [summary], total: 1, page: 1, pageSize: 25 } })) {
   return fakeFetch({
     'GET /api/mail': mailbox,
     'GET /api/mail/m1': () => ({ body: { ...summary, text: 'Plain digest: 3 broken links fixed.', html: hostileHtml } }),
-    'GET /api/outbox': (url) => ({ body: { items: url.searchParams.get('status') === 'failed' ? [{
-      id: 'o1', messageId: '<o1@linkloom.local>', kind: 'digest', toAddress: 'rita@example.com', subject: 'Nightly digest',
-      status: 'failed', attempts: 8, nextAttemptAt: null, lastError: '550 mailbox unavailable', createdAt: '2026-11-30T02:00:00Z', sentAt: null,
-    }] : [], total: 0, page: 1, pageSize: 25 } }),
+    'GET /api/outbox': (url) => ({
+      body: {
+        items:
+          url.searchParams.get('status') === 'failed'
+            ? [
+                {
+                  id: 'o1',
+                  messageId: '<o1@linkloom.local>',
+                  kind: 'digest',
+                  toAddress: 'rita@example.com',
+                  subject: 'Nightly digest',
+                  status: 'failed',
+                  attempts: 8,
+                  nextAttemptAt: null,
+                  lastError: '550 mailbox unavailable',
+                  createdAt: '2026-11-30T02:00:00Z',
+                  sentAt: null,
+                },
+              ]
+            : [],
+        total: 0,
+        page: 1,
+        pageSize: 25,
+      },
+    }),
     'POST /api/outbox/deliver': () => ({ body: { sent: 2 } }),
   });
 }
@@ -53,7 +81,10 @@ describe('mail admin screen', () => {
 
   it('explains the switched-off mailbox instead of showing an error', async () => {
     signInAs('admin');
-    vi.stubGlobal('fetch', api(() => ({ status: 404, body: { statusCode: 404, code: 'MAILBOX_OFF', message: 'The local mailbox is off.' } })).fn);
+    vi.stubGlobal(
+      'fetch',
+      api(() => ({ status: 404, body: { statusCode: 404, code: 'MAILBOX_OFF', message: 'The local mailbox is off.' } })).fn,
+    );
     renderWithProviders(<MailRoute />, { route: '/admin/mail' });
     expect(await screen.findByText('The local mailbox is off')).toBeTruthy();
     expect(screen.getByText(/sends mail through the server named in SMTP_URL/)).toBeTruthy();

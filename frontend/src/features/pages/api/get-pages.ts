@@ -19,8 +19,15 @@ export interface PagesQuery {
 /** The query string of the pages list; the CSV export sends the same filters. */
 export function pagesQueryParams(query: PagesQuery): Query {
   return {
-    page: query.page, pageSize: query.pageSize, sort: query.sort, q: query.q?.trim(), flags: query.flags,
-    minScore: query.minScore, maxScore: query.maxScore, minDepth: query.minDepth, maxDepth: query.maxDepth,
+    page: query.page,
+    pageSize: query.pageSize,
+    sort: query.sort,
+    q: query.q?.trim(),
+    flags: query.flags,
+    minScore: query.minScore,
+    maxScore: query.maxScore,
+    minDepth: query.minDepth,
+    maxDepth: query.maxDepth,
   };
 }
 

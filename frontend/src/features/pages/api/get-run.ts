@@ -22,7 +22,10 @@ export function getRun(docSetId: string, runId: string, signal?: AbortSignal): P
 }
 
 export function runQueryOptions(docSetId: string, runId: string) {
-  return queryOptions({ queryKey: [...runQueryKey(docSetId, runId), 'detail'] as const, queryFn: ({ signal }) => getRun(docSetId, runId, signal) });
+  return queryOptions({
+    queryKey: [...runQueryKey(docSetId, runId), 'detail'] as const,
+    queryFn: ({ signal }) => getRun(docSetId, runId, signal),
+  });
 }
 
 export function useRun(docSetId: string, runId: string) {

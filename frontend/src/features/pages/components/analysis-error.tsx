@@ -11,9 +11,15 @@ export function isNoAnalysis(error: unknown): boolean {
 
 export function NoAnalysisYet({ docSetId }: { docSetId: string }) {
   return (
-    <EmptyState title="No analysis yet"
+    <EmptyState
+      title="No analysis yet"
       hint="Upload an archive of your Markdown on the Overview; the first analysis starts as soon as the import finishes."
-      action={<Button variant="outlined" component={RouterLink} to={`/doc-sets/${encodeURIComponent(docSetId)}`}>Go to the Overview</Button>} />
+      action={
+        <Button variant="outlined" component={RouterLink} to={`/doc-sets/${encodeURIComponent(docSetId)}`}>
+          Go to the Overview
+        </Button>
+      }
+    />
   );
 }
 

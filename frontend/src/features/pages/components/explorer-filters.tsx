@@ -23,18 +23,38 @@ function DebouncedSearch({ value, onChange }: { value: string; onChange: (q: str
     return () => window.clearTimeout(timer);
   }, [text, value, onChange]);
   return (
-    <TextField size="small" label="Filter by path or title" value={text} onChange={(e) => setText(e.target.value)}
+    <TextField
+      size="small"
+      label="Filter by path or title"
+      value={text}
+      onChange={(e) => setText(e.target.value)}
       sx={{ minWidth: 260 }}
-      slotProps={{ input: { startAdornment: <InputAdornment position="start"><SearchOutlined fontSize="small" /></InputAdornment> } }} />
+      slotProps={{
+        input: {
+          startAdornment: (
+            <InputAdornment position="start">
+              <SearchOutlined fontSize="small" />
+            </InputAdornment>
+          ),
+        },
+      }}
+    />
   );
 }
 
 function RangeBox({ label, value, onChange, step }: { label: string; value: string; onChange: (v: string) => void; step: string }) {
   const invalid = value.trim() !== '' && !Number.isFinite(Number(value));
   return (
-    <TextField size="small" label={label} value={value} onChange={(e) => onChange(e.target.value)} error={invalid}
-      helperText={invalid ? 'Enter a number' : undefined} sx={{ width: 120 }}
-      slotProps={{ htmlInput: { inputMode: 'decimal', step } }} />
+    <TextField
+      size="small"
+      label={label}
+      value={value}
+      onChange={(e) => onChange(e.target.value)}
+      error={invalid}
+      helperText={invalid ? 'Enter a number' : undefined}
+      sx={{ width: 120 }}
+      slotProps={{ htmlInput: { inputMode: 'decimal', step } }}
+    />
   );
 }
 
@@ -53,9 +73,16 @@ export function ExplorerFilters({ state, onChange }: ExplorerFiltersProps) {
         {PAGE_FLAGS.map((flag) => {
           const on = state.flags.includes(flag);
           return (
-            <Chip key={flag} label={FLAG_STYLES[flag].label} title={FLAG_STYLES[flag].meaning} clickable
-              color={on ? 'primary' : 'default'} variant={on ? 'filled' : 'outlined'} aria-pressed={on}
-              onClick={() => onChange({ flags: toggleFlag(state.flags, flag) })} />
+            <Chip
+              key={flag}
+              label={FLAG_STYLES[flag].label}
+              title={FLAG_STYLES[flag].meaning}
+              clickable
+              color={on ? 'primary' : 'default'}
+              variant={on ? 'filled' : 'outlined'}
+              aria-pressed={on}
+              onClick={() => onChange({ flags: toggleFlag(state.flags, flag) })}
+            />
           );
         })}
       </Box>

@@ -33,9 +33,15 @@ export function knownFlags(flags: string[]): PageFlag[] {
 
 export function toPagesQuery(state: ExplorerState): PagesQuery {
   return {
-    page: state.page, pageSize: state.pageSize, sort: state.sort, q: state.q, flags: knownFlags(state.flags),
-    minScore: parseBound(state.minScore), maxScore: parseBound(state.maxScore),
-    minDepth: parseBound(state.minDepth), maxDepth: parseBound(state.maxDepth),
+    page: state.page,
+    pageSize: state.pageSize,
+    sort: state.sort,
+    q: state.q,
+    flags: knownFlags(state.flags),
+    minScore: parseBound(state.minScore),
+    maxScore: parseBound(state.maxScore),
+    minDepth: parseBound(state.minDepth),
+    maxDepth: parseBound(state.maxDepth),
   };
 }
 

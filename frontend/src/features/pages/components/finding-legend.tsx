@@ -11,13 +11,23 @@ function Swatch({ colour, label, title }: { colour: string; label: string; title
 }
 
 /** The key to node colours; `withFocus` adds the centre page of a neighbourhood picture. */
-export function FindingLegend({ withFocus = false, sizeNote = 'Larger circles have a higher stationary score.' }: { withFocus?: boolean; sizeNote?: string }) {
+export function FindingLegend({
+  withFocus = false,
+  sizeNote = 'Larger circles have a higher stationary score.',
+}: {
+  withFocus?: boolean;
+  sizeNote?: string;
+}) {
   return (
     <Box component="figure" aria-label="Legend" sx={{ m: 0, display: 'flex', flexWrap: 'wrap', gap: 1.5, alignItems: 'center' }}>
       {withFocus && <Swatch colour={FOCUS_COLOUR} label="This page" />}
       <Swatch colour={HEALTHY_COLOUR} label="No finding" />
-      {Object.values(FLAG_STYLES).map((s) => <Swatch key={s.label} colour={s.colour} label={s.label} title={s.meaning} />)}
-      <Typography variant="caption" color="text.secondary">{sizeNote}</Typography>
+      {Object.values(FLAG_STYLES).map((s) => (
+        <Swatch key={s.label} colour={s.colour} label={s.label} title={s.meaning} />
+      ))}
+      <Typography variant="caption" color="text.secondary">
+        {sizeNote}
+      </Typography>
     </Box>
   );
 }

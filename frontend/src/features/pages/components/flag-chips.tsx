@@ -8,8 +8,13 @@ export function FlagChips({ flags }: { flags: PageFlag[] }) {
   return (
     <Stack direction="row" spacing={0.5} sx={{ flexWrap: 'wrap', rowGap: 0.5 }}>
       {flags.map((flag) => (
-        <Chip key={flag} size="small" label={FLAG_STYLES[flag].label} variant="outlined"
-          sx={{ borderColor: FLAG_STYLES[flag].colour, color: 'text.primary', height: 22 }} />
+        <Chip
+          key={flag}
+          size="small"
+          label={FLAG_STYLES[flag].label}
+          variant="outlined"
+          sx={{ borderColor: FLAG_STYLES[flag].colour, color: 'text.primary', height: 22 }}
+        />
       ))}
     </Stack>
   );

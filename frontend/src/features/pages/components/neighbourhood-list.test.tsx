@@ -33,9 +33,13 @@ describe('NeighbourhoodList', () => {
   it('lists the same pages as the picture, by direction, highest score first, with links to each page', async () => {
     renderWithProviders(<NeighbourhoodList docSetId="d1" runId="latest" centrePath="wheels/truing.md" neighbourhood={neighbourhood} />);
     await screen.findByText(/Pages linking here/);
-    const inbound = group(/Pages linking here/).getAllByRole('link').map((a) => a.textContent);
+    const inbound = group(/Pages linking here/)
+      .getAllByRole('link')
+      .map((a) => a.textContent);
     expect(inbound).toEqual(['Tools', 'Spokes']);
-    const outbound = group(/Pages this page links to/).getAllByRole('link').map((a) => a.textContent);
+    const outbound = group(/Pages this page links to/)
+      .getAllByRole('link')
+      .map((a) => a.textContent);
     expect(outbound).toEqual(['Tools', 'Spoke tension']);
     const twoSteps = group(/Two steps away/).getAllByRole('link');
     expect(twoSteps.map((a) => a.textContent)).toEqual(['Rims', 'Gauges']);

@@ -13,21 +13,37 @@ interface NeighbourhoodListProps {
 }
 
 function flagWords(node: NeighbourNode): string {
-  return node.flags.map((f) => { const k = normaliseFlag(f); return k ? FLAG_STYLES[k].label : f; }).join(', ');
+  return node.flags
+    .map((f) => {
+      const k = normaliseFlag(f);
+      return k ? FLAG_STYLES[k].label : f;
+    })
+    .join(', ');
 }
 
 function Group({ title, nodes, docSetId, runId }: { title: string; nodes: NeighbourNode[]; docSetId: string; runId: string }) {
   const id = `neighbours-${title.replace(/\W+/g, '-').toLowerCase()}`;
   return (
     <Box component="section" aria-labelledby={id}>
-      <Typography id={id} variant="subtitle2" component="h3">{title} ({nodes.length})</Typography>
-      {nodes.length === 0 ? <Typography variant="body2" color="text.secondary">None.</Typography> : (
+      <Typography id={id} variant="subtitle2" component="h3">
+        {title} ({nodes.length})
+      </Typography>
+      {nodes.length === 0 ? (
+        <Typography variant="body2" color="text.secondary">
+          None.
+        </Typography>
+      ) : (
         <List dense disablePadding aria-labelledby={id}>
           {nodes.map((n) => (
             <ListItem key={n.path} disableGutters>
               <ListItemText
-                primary={<Link component={RouterLink} to={pageDetailHref(docSetId, n.path, runId)}>{n.title || n.path}</Link>}
-                secondary={`${n.path} · score ${formatScore(n.stationaryScore)}${n.flags.length ? ` · ${flagWords(n)}` : ''}`} />
+                primary={
+                  <Link component={RouterLink} to={pageDetailHref(docSetId, n.path, runId)}>
+                    {n.title || n.path}
+                  </Link>
+                }
+                secondary={`${n.path} · score ${formatScore(n.stationaryScore)}${n.flags.length ? ` · ${flagWords(n)}` : ''}`}
+              />
             </ListItem>
           ))}
         </List>

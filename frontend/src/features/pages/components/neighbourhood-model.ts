@@ -23,10 +23,12 @@ export function groupNeighbours(neighbourhood: Neighbourhood, centrePath: string
     if (target === centrePath && source !== centrePath) inbound.add(source);
     if (source === centrePath && target !== centrePath) outbound.add(target);
   }
-  const pick = (paths: Set<string>) => [...paths].map((p) => byPath.get(p)).filter((n): n is NeighbourNode => Boolean(n)).sort(byScore);
-  const twoSteps = neighbourhood.nodes
-    .filter((n) => n.path !== centrePath && !inbound.has(n.path) && !outbound.has(n.path))
-    .sort(byScore);
+  const pick = (paths: Set<string>) =>
+    [...paths]
+      .map((p) => byPath.get(p))
+      .filter((n): n is NeighbourNode => Boolean(n))
+      .sort(byScore);
+  const twoSteps = neighbourhood.nodes.filter((n) => n.path !== centrePath && !inbound.has(n.path) && !outbound.has(n.path)).sort(byScore);
   return { centre: byPath.get(centrePath) ?? null, linksHere: pick(inbound), linkedFromHere: pick(outbound), twoSteps };
 }
 
@@ -42,8 +44,11 @@ export function neighbourhoodElements(neighbourhood: Neighbourhood, centrePath: 
   const nodes: NeighbourElement[] = neighbourhood.nodes.map((n) => ({
     group: 'nodes',
     data: {
-      id: n.path, label: shortLabel(n.title || n.path), distance: n.path === centrePath ? 0 : n.distance,
-      size: nodeSize(n.stationaryScore, maxScore), colour: n.path === centrePath ? FOCUS_COLOUR : findingColour(n.flags),
+      id: n.path,
+      label: shortLabel(n.title || n.path),
+      distance: n.path === centrePath ? 0 : n.distance,
+      size: nodeSize(n.stationaryScore, maxScore),
+      colour: n.path === centrePath ? FOCUS_COLOUR : findingColour(n.flags),
     },
   }));
   const edges: NeighbourElement[] = neighbourhood.edges

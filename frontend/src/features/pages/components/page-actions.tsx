@@ -4,7 +4,14 @@ import AssignmentOutlined from '@mui/icons-material/AssignmentOutlined';
 import ContentCutOutlined from '@mui/icons-material/ContentCutOutlined';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
 import type { PageDetail } from '../types.js';
-import { describeNomination, describeTaskRequest, PendingActionDialog, taskKindFor, type FixTaskRequest, type PendingAction } from './work-hook-dialog.js';
+import {
+  describeNomination,
+  describeTaskRequest,
+  PendingActionDialog,
+  taskKindFor,
+  type FixTaskRequest,
+  type PendingAction,
+} from './work-hook-dialog.js';
 
 interface PageActionsProps {
   page: PageDetail;
@@ -23,12 +30,22 @@ export function PageActions({ page, onCreateTask, onNominate }: PageActionsProps
   return (
     <>
       {canCreateTask && (
-        <Button variant="contained" startIcon={<AssignmentOutlined />}
-          onClick={() => (onCreateTask ? onCreateTask(request) : setPending(describeTaskRequest(request)))}>Create fix task</Button>
+        <Button
+          variant="contained"
+          startIcon={<AssignmentOutlined />}
+          onClick={() => (onCreateTask ? onCreateTask(request) : setPending(describeTaskRequest(request)))}
+        >
+          Create fix task
+        </Button>
       )}
       {canNominate && (
-        <Button variant="outlined" startIcon={<ContentCutOutlined />}
-          onClick={() => (onNominate ? onNominate(page.path) : setPending(describeNomination(page.path)))}>Nominate for pruning</Button>
+        <Button
+          variant="outlined"
+          startIcon={<ContentCutOutlined />}
+          onClick={() => (onNominate ? onNominate(page.path) : setPending(describeNomination(page.path)))}
+        >
+          Nominate for pruning
+        </Button>
       )}
       <PendingActionDialog action={pending} onClose={() => setPending(null)} />
     </>

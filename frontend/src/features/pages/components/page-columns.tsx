@@ -6,7 +6,10 @@ import { FlagChips } from './flag-chips.js';
 import { formatCount, formatScore, formatTimesAverage, pageDetailHref } from './format.js';
 
 const number = (id: keyof PageRow, header: string, format: (v: number) => string = formatCount): ColumnDef<PageRow> => ({
-  id, header, accessorKey: id, cell: ({ getValue }) => format(getValue() as number),
+  id,
+  header,
+  accessorKey: id,
+  cell: ({ getValue }) => format(getValue() as number),
   meta: { align: 'right', sortDescFirst: true },
 });
 
@@ -14,13 +17,18 @@ const number = (id: keyof PageRow, header: string, format: (v: number) => string
 export function pageColumns(docSetId: string, runId: string): ColumnDef<PageRow>[] {
   return [
     {
-      id: 'title', header: 'Page', accessorKey: 'title', enableHiding: false,
+      id: 'title',
+      header: 'Page',
+      accessorKey: 'title',
+      enableHiding: false,
       cell: ({ row }) => (
         <Box sx={{ minWidth: 220, maxWidth: 420 }}>
           <Link component={RouterLink} to={pageDetailHref(docSetId, row.original.path, runId)} onClick={(e) => e.stopPropagation()}>
             {row.original.title || row.original.path}
           </Link>
-          <Typography variant="caption" color="text.secondary" component="div" sx={{ wordBreak: 'break-all' }}>{row.original.path}</Typography>
+          <Typography variant="caption" color="text.secondary" component="div" sx={{ wordBreak: 'break-all' }}>
+            {row.original.path}
+          </Typography>
         </Box>
       ),
     },

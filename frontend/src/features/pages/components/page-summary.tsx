@@ -8,9 +8,17 @@ function Metric({ label, value, hint }: { label: string; value: string; hint?: s
   return (
     <Card>
       <CardContent>
-        <Typography variant="body2" color="text.secondary" component="h3">{label}</Typography>
-        <Typography variant="h4" component="p" sx={{ fontWeight: 500, my: 0.5 }}>{value}</Typography>
-        {hint && <Typography variant="caption" color="text.secondary">{hint}</Typography>}
+        <Typography variant="body2" color="text.secondary" component="h3">
+          {label}
+        </Typography>
+        <Typography variant="h4" component="p" sx={{ fontWeight: 500, my: 0.5 }}>
+          {value}
+        </Typography>
+        {hint && (
+          <Typography variant="caption" color="text.secondary">
+            {hint}
+          </Typography>
+        )}
       </CardContent>
     </Card>
   );
@@ -46,26 +54,47 @@ export function PageSummary({ page }: { page: PageDetail }) {
         <Metric label="Rank" value={formatCount(page.rank)} hint="1 is the highest score" />
         <Metric label="Inbound pages" value={formatCount(page.inboundCount)} />
         <Metric label="Outbound pages" value={formatCount(page.outboundCount)} />
-        <Metric label="Click depth" value={formatCount(page.depth)} hint={page.reachable ? undefined : 'Not reachable from an entry page'} />
+        <Metric
+          label="Click depth"
+          value={formatCount(page.depth)}
+          hint={page.reachable ? undefined : 'Not reachable from an entry page'}
+        />
         <Metric label="Words" value={formatCount(page.wordCount)} />
       </Box>
       <FlagChips flags={pageFlags(page)} />
       <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', lg: '1fr 1fr' } }}>
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-labelledby="front-matter-title">
-          <Typography id="front-matter-title" variant="h3" component="h2" gutterBottom>Front matter</Typography>
-          {frontMatter.length === 0 ? <Typography variant="body2" color="text.secondary">This page has no front matter.</Typography> : (
+          <Typography id="front-matter-title" variant="h3" component="h2" gutterBottom>
+            Front matter
+          </Typography>
+          {frontMatter.length === 0 ? (
+            <Typography variant="body2" color="text.secondary">
+              This page has no front matter.
+            </Typography>
+          ) : (
             <Table size="small" aria-labelledby="front-matter-title">
               <TableBody>
                 {frontMatter.map(([key, value]) => (
-                  <TableRow key={key}><TableCell component="th" scope="row" sx={{ width: '30%' }}>{key}</TableCell><TableCell sx={{ wordBreak: 'break-word' }}>{frontMatterValue(value)}</TableCell></TableRow>
+                  <TableRow key={key}>
+                    <TableCell component="th" scope="row" sx={{ width: '30%' }}>
+                      {key}
+                    </TableCell>
+                    <TableCell sx={{ wordBreak: 'break-word' }}>{frontMatterValue(value)}</TableCell>
+                  </TableRow>
                 ))}
               </TableBody>
             </Table>
           )}
         </Paper>
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-labelledby="headings-title">
-          <Typography id="headings-title" variant="h3" component="h2" gutterBottom>Headings</Typography>
-          {(page.headings ?? []).length === 0 ? <Typography variant="body2" color="text.secondary">No headings.</Typography> : (
+          <Typography id="headings-title" variant="h3" component="h2" gutterBottom>
+            Headings
+          </Typography>
+          {(page.headings ?? []).length === 0 ? (
+            <Typography variant="body2" color="text.secondary">
+              No headings.
+            </Typography>
+          ) : (
             <Box component="pre" sx={{ m: 0, fontFamily: 'inherit', fontSize: '0.875rem', whiteSpace: 'pre-wrap' }}>
               {(page.headings ?? []).map(headingText).join('\n')}
             </Box>

@@ -15,29 +15,63 @@ export function SuggestionsPanel({ unlinkedMentions, suggestedSources, stationar
   const open = (path: string) => pageDetailHref(docSetId, path, runId);
   return (
     <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-labelledby="suggestions-title">
-      <Typography id="suggestions-title" variant="h3" component="h2" gutterBottom>Where to add links to this page</Typography>
-      <Typography variant="subtitle2" component="h3">Suggested source pages</Typography>
-      <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-        The score gain is how much this page's stationary score would rise if that page added one link to it,
-        recomputed over the whole link graph with the link in place.
+      <Typography id="suggestions-title" variant="h3" component="h2" gutterBottom>
+        Where to add links to this page
       </Typography>
-      {suggestedSources.length === 0 ? <Typography variant="body2" color="text.secondary">No suggestion for this run.</Typography> : (
+      <Typography variant="subtitle2" component="h3">
+        Suggested source pages
+      </Typography>
+      <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+        The score gain is how much this page's stationary score would rise if that page added one link to it, recomputed over the whole link
+        graph with the link in place.
+      </Typography>
+      {suggestedSources.length === 0 ? (
+        <Typography variant="body2" color="text.secondary">
+          No suggestion for this run.
+        </Typography>
+      ) : (
         <List dense disablePadding>
-          {[...suggestedSources].sort((a, b) => b.scoreGain - a.scoreGain).map((s) => (
-            <ListItem key={s.path} disableGutters>
-              <ListItemText primary={<><Link component={RouterLink} to={open(s.path)}>{s.title || s.path}</Link> · gain {gainWords(s.scoreGain, stationaryScore)}</>}
-                secondary={s.reason ? `${s.path} · ${s.reason}` : s.path} />
-            </ListItem>
-          ))}
+          {[...suggestedSources]
+            .sort((a, b) => b.scoreGain - a.scoreGain)
+            .map((s) => (
+              <ListItem key={s.path} disableGutters>
+                <ListItemText
+                  primary={
+                    <>
+                      <Link component={RouterLink} to={open(s.path)}>
+                        {s.title || s.path}
+                      </Link>{' '}
+                      · gain {gainWords(s.scoreGain, stationaryScore)}
+                    </>
+                  }
+                  secondary={s.reason ? `${s.path} · ${s.reason}` : s.path}
+                />
+              </ListItem>
+            ))}
         </List>
       )}
-      <Typography variant="subtitle2" component="h3" sx={{ mt: 2 }}>Unlinked mentions</Typography>
-      <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>Pages whose text names this page's title but do not link to it.</Typography>
-      {unlinkedMentions.length === 0 ? <Typography variant="body2" color="text.secondary">None found.</Typography> : (
+      <Typography variant="subtitle2" component="h3" sx={{ mt: 2 }}>
+        Unlinked mentions
+      </Typography>
+      <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+        Pages whose text names this page's title but do not link to it.
+      </Typography>
+      {unlinkedMentions.length === 0 ? (
+        <Typography variant="body2" color="text.secondary">
+          None found.
+        </Typography>
+      ) : (
         <List dense disablePadding>
           {unlinkedMentions.map((m) => (
             <ListItem key={m.path} disableGutters>
-              <ListItemText primary={<Link component={RouterLink} to={open(m.path)}>{m.title || m.path}</Link>} secondary={m.path} />
+              <ListItemText
+                primary={
+                  <Link component={RouterLink} to={open(m.path)}>
+                    {m.title || m.path}
+                  </Link>
+                }
+                secondary={m.path}
+              />
             </ListItem>
           ))}
         </List>

@@ -23,16 +23,18 @@ export function describeTaskRequest({ pagePaths, kind }: FixTaskRequest): Pendin
   const pages = pagePaths.length === 1 ? pagePaths[0] : `${pagePaths.length} pages`;
   return {
     title: pagePaths.length === 1 ? 'Create fix task' : 'Create tasks',
-    body: `This will create a "${what}" task for ${pages}, which you can assign to a writer with a due date. `
-      + 'Task creation arrives with the tasks screen; nothing has been created yet.',
+    body:
+      `This will create a "${what}" task for ${pages}, which you can assign to a writer with a due date. ` +
+      'Task creation arrives with the tasks screen; nothing has been created yet.',
   };
 }
 
 export function describeNomination(pagePath: string): PendingAction {
   return {
     title: 'Nominate for pruning',
-    body: `This will put ${pagePath} on the pruning list with your note, where an editor approves, rejects or keeps it. `
-      + 'The pruning list arrives in a later release; nothing has been nominated yet.',
+    body:
+      `This will put ${pagePath} on the pruning list with your note, where an editor approves, rejects or keeps it. ` +
+      'The pruning list arrives in a later release; nothing has been nominated yet.',
   };
 }
 
@@ -40,8 +42,14 @@ export function PendingActionDialog({ action, onClose }: { action: PendingAction
   return (
     <Dialog open={action !== null} onClose={onClose} aria-labelledby="pending-action-title" maxWidth="xs" fullWidth>
       <DialogTitle id="pending-action-title">{action?.title}</DialogTitle>
-      <DialogContent><DialogContentText>{action?.body}</DialogContentText></DialogContent>
-      <DialogActions><Button onClick={onClose} variant="contained">Close</Button></DialogActions>
+      <DialogContent>
+        <DialogContentText>{action?.body}</DialogContentText>
+      </DialogContent>
+      <DialogActions>
+        <Button onClick={onClose} variant="contained">
+          Close
+        </Button>
+      </DialogActions>
     </Dialog>
   );
 }

@@ -14,7 +14,8 @@ function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest/page': (url) => ({
       body: pageDetail(url.searchParams.get('path') ?? '', {
-        title: 'Chain wear', brokenLinks: [{ href: 'javascript:void(0)', line: 8, column: 2, status: 'unsafe', reason: 'Runs script' }],
+        title: 'Chain wear',
+        brokenLinks: [{ href: 'javascript:void(0)', line: 8, column: 2, status: 'unsafe', reason: 'Runs script' }],
         suggestedSources: [{ path: 'tools.md', title: 'Tools', scoreGain: 0.002, reason: 'Mentions chains' }],
         inbound: [{ path: 'index.md', title: 'Welcome', line: 14 }],
       }),
@@ -22,7 +23,8 @@ function api() {
   });
 }
 
-const render = () => renderWithProviders(<PageDetailRoute />, { route: '/doc-sets/d1/page?path=drive/chain.md', path: '/doc-sets/:docSetId/page' });
+const render = () =>
+  renderWithProviders(<PageDetailRoute />, { route: '/doc-sets/d1/page?path=drive/chain.md', path: '/doc-sets/:docSetId/page' });
 
 describe('page detail', () => {
   it('shows links with line numbers, unsafe hrefs as text, and no actions for viewers', async () => {

@@ -28,23 +28,50 @@ export default function PageDetailRoute() {
   const pagesHref = `/doc-sets/${encodeURIComponent(docSetId)}/pages`;
   const crumbs = (
     <Breadcrumbs aria-label="Breadcrumb" sx={{ mb: 1 }}>
-      <Link component={RouterLink} to={pagesHref}>Pages</Link>
-      <Typography color="text.primary" sx={{ wordBreak: 'break-all' }}>{path || 'No page chosen'}</Typography>
+      <Link component={RouterLink} to={pagesHref}>
+        Pages
+      </Link>
+      <Typography color="text.primary" sx={{ wordBreak: 'break-all' }}>
+        {path || 'No page chosen'}
+      </Typography>
     </Breadcrumbs>
   );
 
   if (!path) {
-    return <>{crumbs}<EmptyState title="No page chosen" hint="Pick a page in the Pages list to see its links, findings and neighbourhood." /></>;
+    return (
+      <>
+        {crumbs}
+        <EmptyState title="No page chosen" hint="Pick a page in the Pages list to see its links, findings and neighbourhood." />
+      </>
+    );
   }
-  if (page.isLoading) return <>{crumbs}<LoadingSkeleton variant="cards" count={6} /><Box sx={{ mt: 2 }}><LoadingSkeleton variant="chart" /></Box></>;
+  if (page.isLoading)
+    return (
+      <>
+        {crumbs}
+        <LoadingSkeleton variant="cards" count={6} />
+        <Box sx={{ mt: 2 }}>
+          <LoadingSkeleton variant="chart" />
+        </Box>
+      </>
+    );
   if (page.error || !page.data) {
-    return <>{crumbs}<AnalysisError docSetId={docSetId} error={page.error} onRetry={() => page.refetch()} /></>;
+    return (
+      <>
+        {crumbs}
+        <AnalysisError docSetId={docSetId} error={page.error} onRetry={() => page.refetch()} />
+      </>
+    );
   }
   const data = page.data;
   return (
     <>
       {crumbs}
-      <PageHeader title={data.title || data.path} subtitle={data.path} actions={<PageActions page={data} onCreateTask={setTaskRequest} onNominate={setNominating} />} />
+      <PageHeader
+        title={data.title || data.path}
+        subtitle={data.path}
+        actions={<PageActions page={data} onCreateTask={setTaskRequest} onNominate={setNominating} />}
+      />
       <CreateTasksDialog request={taskRequest} onClose={() => setTaskRequest(null)} />
       <NominateDialog path={nominating} onClose={() => setNominating(null)} />
       <Stack spacing={3}>
@@ -53,17 +80,34 @@ export default function PageDetailRoute() {
           <NeighbourhoodPanel docSetId={docSetId} runId={runId} centrePath={data.path} neighbourhood={data.neighbourhood} />
           <Stack spacing={3}>
             <ScoreHistoryChart history={data.scoreHistory ?? []} />
-            <SuggestionsPanel docSetId={docSetId} runId={runId} stationaryScore={data.stationaryScore}
-              unlinkedMentions={data.unlinkedMentions ?? []} suggestedSources={data.suggestedSources ?? []} />
+            <SuggestionsPanel
+              docSetId={docSetId}
+              runId={runId}
+              stationaryScore={data.stationaryScore}
+              unlinkedMentions={data.unlinkedMentions ?? []}
+              suggestedSources={data.suggestedSources ?? []}
+            />
           </Stack>
         </Box>
         <PageTasksPanel docSetId={docSetId} pagePath={data.path} />
         <BrokenLinksPanel links={data.brokenLinks ?? []} anchors={data.anchors ?? []} />
         <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: '1fr 1fr' } }}>
-          <LinkedPagesPanel title="Linked from" lineOf="in the linking page" pages={data.inbound ?? []} docSetId={docSetId} runId={runId}
-            empty="No other page links here: this page is an orphan. See the suggestions above." />
-          <LinkedPagesPanel title="Links to" lineOf="on this page" pages={data.outbound ?? []} docSetId={docSetId} runId={runId}
-            empty="This page links to no other page: a dead end. Add a link onwards to a related page." />
+          <LinkedPagesPanel
+            title="Linked from"
+            lineOf="in the linking page"
+            pages={data.inbound ?? []}
+            docSetId={docSetId}
+            runId={runId}
+            empty="No other page links here: this page is an orphan. See the suggestions above."
+          />
+          <LinkedPagesPanel
+            title="Links to"
+            lineOf="on this page"
+            pages={data.outbound ?? []}
+            docSetId={docSetId}
+            runId={runId}
+            empty="This page links to no other page: a dead end. Add a link onwards to a related page."
+          />
         </Box>
       </Stack>
     </>

@@ -12,10 +12,13 @@ function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest/pages': (url) => ({
       body: {
-        items: url.searchParams.get('flags') === 'orphan'
-          ? [pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })]
-          : [pageRow('index.md', { rank: 1 }), pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })],
-        total: 2, page: 1, pageSize: 50,
+        items:
+          url.searchParams.get('flags') === 'orphan'
+            ? [pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })]
+            : [pageRow('index.md', { rank: 1 }), pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })],
+        total: 2,
+        page: 1,
+        pageSize: 50,
       },
     }),
   });

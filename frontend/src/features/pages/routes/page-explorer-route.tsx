@@ -30,9 +30,13 @@ export default function PageExplorerRoute() {
   const onFilterChange = useCallback((patch: Partial<ExplorerState>) => setState(patch), [setState]);
   const visibility: VisibilityState = Object.fromEntries(state.hide.map((id) => [id, false]));
 
-  const download = () => exportCsv.mutate({ view: 'pages', filters: pagesQueryParams(query) }, {
-    onError: (error) => notify(`The export failed: ${errorMessage(error)}`, 'error'),
-  });
+  const download = () =>
+    exportCsv.mutate(
+      { view: 'pages', filters: pagesQueryParams(query) },
+      {
+        onError: (error) => notify(`The export failed: ${errorMessage(error)}`, 'error'),
+      },
+    );
   const exportButton = (
     <Button variant="outlined" startIcon={<FileDownloadOutlined />} onClick={download} disabled={exportCsv.isPending || !pages.data?.total}>
       {exportCsv.isPending ? 'Preparing CSV…' : 'Export CSV'}
@@ -41,24 +45,48 @@ export default function PageExplorerRoute() {
 
   return (
     <>
-      <PageHeader title="Pages" actions={exportButton}
-        subtitle="Every page of the doc set with its stationary score (PageRank), links and findings. Click a row for the page's detail." />
+      <PageHeader
+        title="Pages"
+        actions={exportButton}
+        subtitle="Every page of the doc set with its stationary score (PageRank), links and findings. Click a row for the page's detail."
+      />
       {pages.error && isNoAnalysis(pages.error) ? (
         <AnalysisError docSetId={docSetId} error={pages.error} onRetry={() => pages.refetch()} />
       ) : (
         <>
           <ExplorerFilters state={state} onChange={onFilterChange} />
-          <DataTable label="Pages" columns={columns} data={pages.data?.items} total={pages.data?.total ?? 0}
-            page={state.page} pageSize={state.pageSize} sort={state.sort}
-            onPageChange={(page) => setState({ page })} onPageSizeChange={(pageSize) => setState({ pageSize })}
+          <DataTable
+            label="Pages"
+            columns={columns}
+            data={pages.data?.items}
+            total={pages.data?.total ?? 0}
+            page={state.page}
+            pageSize={state.pageSize}
+            sort={state.sort}
+            onPageChange={(page) => setState({ page })}
+            onPageSizeChange={(pageSize) => setState({ pageSize })}
             onSortChange={(sort) => setState({ sort })}
-            loading={pages.isFetching} error={pages.error} onRetry={() => pages.refetch()} rowId={(r) => r.path}
+            loading={pages.isFetching}
+            error={pages.error}
+            onRetry={() => pages.refetch()}
+            rowId={(r) => r.path}
             columnVisibility={visibility}
             onColumnVisibilityChange={(v) => setState({ hide: Object.keys(v).filter((id) => v[id] === false) })}
             onRowClick={(row) => navigate(pageDetailHref(docSetId, row.path, runId))}
-            emptyState={isFiltered(state)
-              ? <EmptyState title="No page matches these filters" hint="Loosen a range, switch off a finding chip or clear the text filter." />
-              : <EmptyState title="No pages in this run" hint="The snapshot held no Markdown pages. Check the archive's folder layout on the Overview and upload again." />} />
+            emptyState={
+              isFiltered(state) ? (
+                <EmptyState
+                  title="No page matches these filters"
+                  hint="Loosen a range, switch off a finding chip or clear the text filter."
+                />
+              ) : (
+                <EmptyState
+                  title="No pages in this run"
+                  hint="The snapshot held no Markdown pages. Check the archive's folder layout on the Overview and upload again."
+                />
+              )
+            }
+          />
         </>
       )}
     </>

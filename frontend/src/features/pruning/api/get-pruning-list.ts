@@ -11,7 +11,10 @@ export interface PruningQuery {
 }
 
 export function getPruningList(docSetId: string, query: PruningQuery, signal?: AbortSignal): Promise<PruningList> {
-  return apiFetch<PruningList>(`/doc-sets/${encodeURIComponent(docSetId)}/pruning`, { query: { ...query, status: query.status || undefined }, signal });
+  return apiFetch<PruningList>(`/doc-sets/${encodeURIComponent(docSetId)}/pruning`, {
+    query: { ...query, status: query.status || undefined },
+    signal,
+  });
 }
 
 export function pruningListQueryOptions(docSetId: string, query: PruningQuery) {

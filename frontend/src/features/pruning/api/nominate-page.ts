@@ -9,5 +9,8 @@ export function nominatePage({ docSetId, path, reason }: { docSetId: string; pat
 
 export function useNominatePage() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: nominatePage, onSuccess: (_r, { docSetId }) => queryClient.invalidateQueries({ queryKey: pruningQueryKey(docSetId) }) });
+  return useMutation({
+    mutationFn: nominatePage,
+    onSuccess: (_r, { docSetId }) => queryClient.invalidateQueries({ queryKey: pruningQueryKey(docSetId) }),
+  });
 }

@@ -23,13 +23,16 @@ export function NominateDialog({ path, onClose, docSetId }: { path: string | nul
   const submit = (event: FormEvent) => {
     event.preventDefault();
     if (reason.trim().length < 3) return setProblem('Say briefly why this page could go.');
-    nominate.mutate({ docSetId: target, path, reason: reason.trim() }, {
-      onSuccess: () => {
-        notify('Nominated: an editor will decide');
-        onClose();
+    nominate.mutate(
+      { docSetId: target, path, reason: reason.trim() },
+      {
+        onSuccess: () => {
+          notify('Nominated: an editor will decide');
+          onClose();
+        },
+        onError: (error) => setProblem(errorMessage(error)),
       },
-      onError: (error) => setProblem(errorMessage(error)),
-    });
+    );
   };
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
@@ -39,13 +42,22 @@ export function NominateDialog({ path, onClose, docSetId }: { path: string | nul
           <Stack spacing={2} sx={{ mt: 1 }}>
             {problem && <Alert severity="error">{problem}</Alert>}
             <TextField label="Page" value={path} disabled />
-            <TextField label="Reason" value={reason} onChange={(e) => setReason(e.target.value)} multiline minRows={2} autoFocus
-              helperText="Editors see this reason next to the page; it is kept in the audit log." />
+            <TextField
+              label="Reason"
+              value={reason}
+              onChange={(e) => setReason(e.target.value)}
+              multiline
+              minRows={2}
+              autoFocus
+              helperText="Editors see this reason next to the page; it is kept in the audit log."
+            />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" disabled={nominate.isPending}>Nominate</Button>
+          <Button type="submit" variant="contained" disabled={nominate.isPending}>
+            Nominate
+          </Button>
         </DialogActions>
       </form>
     </Dialog>

@@ -8,7 +8,12 @@ export function ReasonChips({ reasons }: { reasons: PruningReason[] }) {
     <Stack direction="row" spacing={0.5} sx={{ flexWrap: 'wrap', rowGap: 0.5 }}>
       {reasons.map((r, i) => (
         <Tooltip key={`${r.rule}-${i}`} title={r.detail}>
-          <Chip size="small" variant={r.rule === 'nominated' ? 'filled' : 'outlined'} label={RULE_LABELS[r.rule]} aria-label={`${RULE_LABELS[r.rule]}: ${r.detail}`} />
+          <Chip
+            size="small"
+            variant={r.rule === 'nominated' ? 'filled' : 'outlined'}
+            label={RULE_LABELS[r.rule]}
+            aria-label={`${RULE_LABELS[r.rule]}: ${r.detail}`}
+          />
         </Tooltip>
       ))}
     </Stack>

@@ -8,19 +8,39 @@ import PruningRoute from './pruning-route.js';
 afterEach(() => vi.unstubAllGlobals());
 
 const item = (path: string) => ({
-  path, title: path, reasons: [{ rule: 'orphan', detail: 'No other page links here.' }, { rule: 'thin', detail: '12 words (fewer than 80).' }],
-  inLatestRun: true, inboundCount: 0, stationaryScore: 0.01, wordCount: 12, reviewedAt: null, firstProposedAt: '2026-01-01T00:00:00Z', nominations: [], decision: null,
+  path,
+  title: path,
+  reasons: [
+    { rule: 'orphan', detail: 'No other page links here.' },
+    { rule: 'thin', detail: '12 words (fewer than 80).' },
+  ],
+  inLatestRun: true,
+  inboundCount: 0,
+  stationaryScore: 0.01,
+  wordCount: 12,
+  reviewedAt: null,
+  firstProposedAt: '2026-01-01T00:00:00Z',
+  nominations: [],
+  decision: null,
 });
 
 function api(conflict = false) {
   return fakeFetch({
     'GET /api/doc-sets/d1/pruning': () => ({
-      body: { items: [item('guide/old.md'), item('guide/stub.md')], total: 2, page: 1, pageSize: 50, version: 7, runId: 'r1',
-        rules: { lowScorePercentile: 20, staleDays: 365, thinWordCount: 80, protectGlobs: ['legal/**'] } },
+      body: {
+        items: [item('guide/old.md'), item('guide/stub.md')],
+        total: 2,
+        page: 1,
+        pageSize: 50,
+        version: 7,
+        runId: 'r1',
+        rules: { lowScorePercentile: 20, staleDays: 365, thinWordCount: 80, protectGlobs: ['legal/**'] },
+      },
     }),
-    'POST /api/doc-sets/d1/pruning/decisions': () => (conflict
-      ? { status: 409, body: { statusCode: 409, code: 'PRUNING_LIST_CHANGED', message: 'changed' } }
-      : { body: { version: 8, decided: 2 } }),
+    'POST /api/doc-sets/d1/pruning/decisions': () =>
+      conflict
+        ? { status: 409, body: { statusCode: 409, code: 'PRUNING_LIST_CHANGED', message: 'changed' } }
+        : { body: { version: 8, decided: 2 } },
   });
 }
 

@@ -47,18 +47,29 @@ export function normaliseDiff(raw: RawDiff): RunDiff {
     .map(([kind, k]) => {
       const appeared = readList(k.appeared);
       const disappeared = readList(k.disappeared);
-      return { kind, appearedTotal: appeared.total, disappearedTotal: disappeared.total, appeared: appeared.items, disappeared: disappeared.items };
+      return {
+        kind,
+        appearedTotal: appeared.total,
+        disappearedTotal: disappeared.total,
+        appeared: appeared.items,
+        disappeared: disappeared.items,
+      };
     })
     .filter((f) => f.appearedTotal > 0 || f.disappearedTotal > 0);
-  const scoreMoves = (raw.scoreMoves ?? []).map((m) => ({ path: m.path, title: m.title, before: m.before ?? null, after: m.after ?? null }));
+  const scoreMoves = (raw.scoreMoves ?? []).map((m) => ({
+    path: m.path,
+    title: m.title,
+    before: m.before ?? null,
+    after: m.after ?? null,
+  }));
   return { findings, scoreMoves };
 }
 
 export async function getRunDiff(docSetId: string, runId: string, againstId: string, signal?: AbortSignal): Promise<RunDiff> {
-  const raw = await apiFetch<RawDiff>(
-    `/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/diff`,
-    { query: { against: againstId }, signal },
-  );
+  const raw = await apiFetch<RawDiff>(`/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/diff`, {
+    query: { against: againstId },
+    signal,
+  });
   return normaliseDiff(raw);
 }
 

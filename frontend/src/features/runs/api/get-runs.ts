@@ -14,7 +14,8 @@ function startedTime(run: Run): number {
 /** Runs newest first, whatever order the server used. */
 export async function getRuns(docSetId: string, signal?: AbortSignal): Promise<Run[]> {
   const result = await apiFetch<ListResult<Run> | Run[]>(`/doc-sets/${encodeURIComponent(docSetId)}/runs`, {
-    query: { page: 1, pageSize: 500 }, signal,
+    query: { page: 1, pageSize: 500 },
+    signal,
   });
   const runs = Array.isArray(result) ? result : result.items;
   return [...runs].sort((a, b) => startedTime(b) - startedTime(a));

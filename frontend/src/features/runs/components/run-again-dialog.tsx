@@ -1,5 +1,18 @@
 import { useState, type FormEvent } from 'react';
-import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, FormControlLabel, Radio, RadioGroup, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  FormControlLabel,
+  Radio,
+  RadioGroup,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import { docSetSettingsPatchSchema, type DocSetSettings } from '@linkloom/shared';
 import { errorMessage } from '../../../lib/api-client.js';
 
@@ -12,7 +25,10 @@ export function validateOverrides(input: { damping: string; teleport: string; en
   const result = overridesSchema.safeParse({
     damping: input.damping.trim() === '' ? Number.NaN : Number(input.damping),
     teleport: input.teleport,
-    entryPages: input.entryPages.split(/\r?\n/).map((l) => l.trim()).filter(Boolean),
+    entryPages: input.entryPages
+      .split(/\r?\n/)
+      .map((l) => l.trim())
+      .filter(Boolean),
     depthThreshold: input.depthThreshold.trim() === '' ? Number.NaN : Number(input.depthThreshold),
   });
   if (result.success) return { overrides: result.data as Overrides, problem: null };
@@ -55,21 +71,44 @@ export function RunAgainDialog({ open, current, busy, onClose, onRun }: Props) {
         <DialogTitle>Run again with…</DialogTitle>
         <DialogContent>
           <Stack spacing={2} sx={{ mt: 1 }}>
-            <Typography variant="body2" color="text.secondary">Try other scoring settings on the latest snapshot. Saved settings do not change.</Typography>
+            <Typography variant="body2" color="text.secondary">
+              Try other scoring settings on the latest snapshot. Saved settings do not change.
+            </Typography>
             {problem && <Alert severity="error">{problem}</Alert>}
-            <TextField label="Damping factor" type="number" value={damping} onChange={(e) => setDamping(e.target.value)} slotProps={{ htmlInput: { step: 0.01 } }}
-              helperText="The chance a reader follows a link rather than jumping elsewhere (between 0 and 1; 0.85 is classic)." />
+            <TextField
+              label="Damping factor"
+              type="number"
+              value={damping}
+              onChange={(e) => setDamping(e.target.value)}
+              slotProps={{ htmlInput: { step: 0.01 } }}
+              helperText="The chance a reader follows a link rather than jumping elsewhere (between 0 and 1; 0.85 is classic)."
+            />
             <RadioGroup value={teleport} onChange={(e) => setTeleport(e.target.value)} aria-label="Where jumps land">
               <FormControlLabel value="uniform" control={<Radio />} label="Jumps land on any page" />
               <FormControlLabel value="entry-pages" control={<Radio />} label="Jumps land on entry pages" />
             </RadioGroup>
-            <TextField label="Entry pages" multiline minRows={2} value={entryPages} onChange={(e) => setEntryPages(e.target.value)} helperText="One path per line." />
-            <TextField label="Depth threshold" type="number" value={depthThreshold} onChange={(e) => setDepthThreshold(e.target.value)} helperText="Clicks from an entry page beyond which a page counts as deep." />
+            <TextField
+              label="Entry pages"
+              multiline
+              minRows={2}
+              value={entryPages}
+              onChange={(e) => setEntryPages(e.target.value)}
+              helperText="One path per line."
+            />
+            <TextField
+              label="Depth threshold"
+              type="number"
+              value={depthThreshold}
+              onChange={(e) => setDepthThreshold(e.target.value)}
+              helperText="Clicks from an entry page beyond which a page counts as deep."
+            />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" disabled={busy}>Start run</Button>
+          <Button type="submit" variant="contained" disabled={busy}>
+            Start run
+          </Button>
         </DialogActions>
       </form>
     </Dialog>

@@ -13,18 +13,31 @@ export function runDuration(run: Pick<Run, 'startedAt' | 'finishedAt' | 'duratio
 }
 
 const count = (key: keyof NonNullable<Run['counts']> & string, header: string): ColumnDef<Run, unknown> => ({
-  id: key, header, enableSorting: false, meta: { align: 'right' },
+  id: key,
+  header,
+  enableSorting: false,
+  meta: { align: 'right' },
   cell: ({ row }) => (row.original.counts ? nf.format(row.original.counts[key]) : '—'),
 });
 
 export const runColumns: ColumnDef<Run, unknown>[] = [
-  { id: 'startedAt', header: 'Started', enableSorting: false, enableHiding: false,
-    cell: ({ row }) => (row.original.startedAt ? new Date(row.original.startedAt).toLocaleString() : 'waiting') },
+  {
+    id: 'startedAt',
+    header: 'Started',
+    enableSorting: false,
+    enableHiding: false,
+    cell: ({ row }) => (row.original.startedAt ? new Date(row.original.startedAt).toLocaleString() : 'waiting'),
+  },
   { accessorKey: 'trigger', header: 'Trigger', enableSorting: false },
   { id: 'status', header: 'Status', enableSorting: false, cell: ({ row }) => <StatusChip status={row.original.status} /> },
   { accessorKey: 'iterations', header: 'Iterations', enableSorting: false, meta: { align: 'right' } },
-  { id: 'residual', header: 'Residual', enableSorting: false, meta: { align: 'right' },
-    cell: ({ row }) => (row.original.residual == null ? '—' : row.original.residual.toExponential(1)) },
+  {
+    id: 'residual',
+    header: 'Residual',
+    enableSorting: false,
+    meta: { align: 'right' },
+    cell: ({ row }) => (row.original.residual == null ? '—' : row.original.residual.toExponential(1)),
+  },
   { id: 'duration', header: 'Duration', enableSorting: false, meta: { align: 'right' }, cell: ({ row }) => runDuration(row.original) },
   count('pages', 'Pages'),
   count('brokenLinks', 'Broken links'),

@@ -4,8 +4,15 @@ import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import { useRunDiff, type FindingChange } from '../api/get-run-diff.js';
 
 const KIND_WORDS: Record<string, string> = {
-  brokenLinks: 'Broken links', brokenAnchors: 'Broken anchors', unsafeLinks: 'Unsafe links', ambiguousLinks: 'Ambiguous links',
-  orphans: 'Orphan pages', deadEnds: 'Dead ends', unreachable: 'Unreachable pages', deepPages: 'Deep pages', islandPages: 'Pages on islands',
+  brokenLinks: 'Broken links',
+  brokenAnchors: 'Broken anchors',
+  unsafeLinks: 'Unsafe links',
+  ambiguousLinks: 'Ambiguous links',
+  orphans: 'Orphan pages',
+  deadEnds: 'Dead ends',
+  unreachable: 'Unreachable pages',
+  deepPages: 'Deep pages',
+  islandPages: 'Pages on islands',
 };
 
 /** A finding is a page path, a link, or something else; show the most telling text. */
@@ -20,12 +27,17 @@ function describe(item: unknown): string {
 }
 
 function KindRow({ change }: { change: FindingChange }) {
-  const sample = (items: unknown[], total: number) => items.slice(0, 5).map(describe).join(', ') + (total > 5 ? ` and ${total - Math.min(5, items.length)} more` : '');
+  const sample = (items: unknown[], total: number) =>
+    items.slice(0, 5).map(describe).join(', ') + (total > 5 ? ` and ${total - Math.min(5, items.length)} more` : '');
   return (
     <TableRow>
       <TableCell>{KIND_WORDS[change.kind] ?? change.kind}</TableCell>
-      <TableCell align="right" sx={{ color: change.appearedTotal ? 'error.main' : undefined }}>+{change.appearedTotal}</TableCell>
-      <TableCell align="right" sx={{ color: change.disappearedTotal ? 'success.main' : undefined }}>−{change.disappearedTotal}</TableCell>
+      <TableCell align="right" sx={{ color: change.appearedTotal ? 'error.main' : undefined }}>
+        +{change.appearedTotal}
+      </TableCell>
+      <TableCell align="right" sx={{ color: change.disappearedTotal ? 'success.main' : undefined }}>
+        −{change.disappearedTotal}
+      </TableCell>
       <TableCell sx={{ fontSize: 12, color: 'text.secondary' }}>
         {change.appearedTotal > 0 && <div>New: {sample(change.appeared, change.appearedTotal)}</div>}
         {change.disappearedTotal > 0 && <div>Fixed or gone: {sample(change.disappeared, change.disappearedTotal)}</div>}
@@ -38,20 +50,41 @@ export function RunDiffPanel({ docSetId, runId, againstId }: { docSetId: string;
   const diff = useRunDiff(docSetId, runId, againstId);
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Typography variant="h3" component="h2" gutterBottom>What changed between the two runs</Typography>
+      <Typography variant="h3" component="h2" gutterBottom>
+        What changed between the two runs
+      </Typography>
       {diff.isLoading && <LoadingSkeleton count={6} />}
       {diff.isError && <ErrorPanel error={diff.error} onRetry={() => diff.refetch()} />}
       {diff.data && (
         <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: '3fr 2fr' } }}>
           <Table size="small" aria-label="Findings that appeared and disappeared">
-            <TableHead><TableRow><TableCell>Finding</TableCell><TableCell align="right">Appeared</TableCell><TableCell align="right">Disappeared</TableCell><TableCell>Examples</TableCell></TableRow></TableHead>
+            <TableHead>
+              <TableRow>
+                <TableCell>Finding</TableCell>
+                <TableCell align="right">Appeared</TableCell>
+                <TableCell align="right">Disappeared</TableCell>
+                <TableCell>Examples</TableCell>
+              </TableRow>
+            </TableHead>
             <TableBody>
-              {diff.data.findings.map((c) => <KindRow key={c.kind} change={c} />)}
-              {diff.data.findings.length === 0 && <TableRow><TableCell colSpan={4}>No findings changed.</TableCell></TableRow>}
+              {diff.data.findings.map((c) => (
+                <KindRow key={c.kind} change={c} />
+              ))}
+              {diff.data.findings.length === 0 && (
+                <TableRow>
+                  <TableCell colSpan={4}>No findings changed.</TableCell>
+                </TableRow>
+              )}
             </TableBody>
           </Table>
           <Table size="small" aria-label="Largest score moves">
-            <TableHead><TableRow><TableCell>Page</TableCell><TableCell align="right">Before</TableCell><TableCell align="right">After</TableCell></TableRow></TableHead>
+            <TableHead>
+              <TableRow>
+                <TableCell>Page</TableCell>
+                <TableCell align="right">Before</TableCell>
+                <TableCell align="right">After</TableCell>
+              </TableRow>
+            </TableHead>
             <TableBody>
               {diff.data.scoreMoves.slice(0, 15).map((m) => (
                 <TableRow key={m.path}>
@@ -62,7 +95,11 @@ export function RunDiffPanel({ docSetId, runId, againstId }: { docSetId: string;
                   </TableCell>
                 </TableRow>
               ))}
-              {diff.data.scoreMoves.length === 0 && <TableRow><TableCell colSpan={3}>No page moved noticeably.</TableCell></TableRow>}
+              {diff.data.scoreMoves.length === 0 && (
+                <TableRow>
+                  <TableCell colSpan={3}>No page moved noticeably.</TableCell>
+                </TableRow>
+              )}
             </TableBody>
           </Table>
         </Box>

@@ -13,9 +13,13 @@ function api() {
     'GET /api/doc-sets/d1/runs': () => ({ body: { items: [run('r1', 1), run('r3', 3), run('r2', 2)], total: 3, page: 1, pageSize: 500 } }),
     'GET /api/doc-sets/d1/runs/r3/diff': () => ({
       body: {
-        runId: 'r3', againstRunId: 'r1',
+        runId: 'r3',
+        againstRunId: 'r1',
         kinds: {
-          brokenLinks: { appeared: { total: 1, items: [{ sourcePath: 'guide/a.md', line: 4, href: 'gone.md' }] }, disappeared: { total: 0, items: [] } },
+          brokenLinks: {
+            appeared: { total: 1, items: [{ sourcePath: 'guide/a.md', line: 4, href: 'gone.md' }] },
+            disappeared: { total: 0, items: [] },
+          },
           orphans: { appeared: { total: 0, items: [] }, disappeared: { total: 0, items: [] } },
         },
         scoreMoves: [{ path: 'index.md', title: 'Welcome', before: 0.05, after: 0.08 }],

@@ -39,28 +39,71 @@ export default function RunsRoute() {
 
   return (
     <>
-      <PageHeader title="Runs" subtitle="Each run analyses one snapshot. Pick two finished runs to see what changed."
-        actions={<>
-          <Button variant="outlined" startIcon={<CompareArrowsOutlined />} disabled={selected.length !== 2} onClick={compare}>Compare selected</Button>
-          {canRun && <Button variant="contained" startIcon={<ReplayOutlined />} onClick={() => setRerunning(true)}>Run again with…</Button>}
-        </>} />
+      <PageHeader
+        title="Runs"
+        subtitle="Each run analyses one snapshot. Pick two finished runs to see what changed."
+        actions={
+          <>
+            <Button variant="outlined" startIcon={<CompareArrowsOutlined />} disabled={selected.length !== 2} onClick={compare}>
+              Compare selected
+            </Button>
+            {canRun && (
+              <Button variant="contained" startIcon={<ReplayOutlined />} onClick={() => setRerunning(true)}>
+                Run again with…
+              </Button>
+            )}
+          </>
+        }
+      />
       <Stack spacing={3}>
-        <DataTable label="Runs" columns={runColumns} data={runs.data ? shown : undefined} total={all.length}
-          page={state.page} pageSize={state.pageSize} sort="" onSortChange={() => undefined}
-          onPageChange={(page) => setState({ page })} onPageSizeChange={(pageSize) => setState({ pageSize })}
-          loading={runs.isLoading} error={runs.error} onRetry={() => runs.refetch()} rowId={(r) => r.id}
-          selectable selectedIds={selected} onSelectionChange={(ids) => setSelected(ids.slice(-2))}
-          toolbar={<Typography variant="body2" color="text.secondary">Select two runs to compare them.</Typography>}
-          emptyState={<EmptyState title="No runs yet" hint="No snapshot yet: upload a zip of your Markdown on the overview; the first run starts after the import." />} />
+        <DataTable
+          label="Runs"
+          columns={runColumns}
+          data={runs.data ? shown : undefined}
+          total={all.length}
+          page={state.page}
+          pageSize={state.pageSize}
+          sort=""
+          onSortChange={() => undefined}
+          onPageChange={(page) => setState({ page })}
+          onPageSizeChange={(pageSize) => setState({ pageSize })}
+          loading={runs.isLoading}
+          error={runs.error}
+          onRetry={() => runs.refetch()}
+          rowId={(r) => r.id}
+          selectable
+          selectedIds={selected}
+          onSelectionChange={(ids) => setSelected(ids.slice(-2))}
+          toolbar={
+            <Typography variant="body2" color="text.secondary">
+              Select two runs to compare them.
+            </Typography>
+          }
+          emptyState={
+            <EmptyState
+              title="No runs yet"
+              hint="No snapshot yet: upload a zip of your Markdown on the overview; the first run starts after the import."
+            />
+          }
+        />
         {state.run && state.against && <RunDiffPanel docSetId={docSetId} runId={state.run} againstId={state.against} />}
       </Stack>
       {canRun && rerunning && (
-        <RunAgainDialog open busy={createRun.isPending} onClose={() => setRerunning(false)}
-          current={{ damping: settings.damping, teleport: settings.teleport, entryPages: settings.entryPages, depthThreshold: settings.depthThreshold }}
+        <RunAgainDialog
+          open
+          busy={createRun.isPending}
+          onClose={() => setRerunning(false)}
+          current={{
+            damping: settings.damping,
+            teleport: settings.teleport,
+            entryPages: settings.entryPages,
+            depthThreshold: settings.depthThreshold,
+          }}
           onRun={async (overrides) => {
             await createRun.mutateAsync(overrides);
             notify('A new run has started');
-          }} />
+          }}
+        />
       )}
     </>
   );

@@ -15,17 +15,26 @@ export function LastResultTable({ result }: { result: NightlyResult | null }) {
   if (!result || !result.docSets?.length) {
     return (
       <Paper variant="outlined">
-        <EmptyState title={result ? 'The last nightly job had nothing to do' : 'No nightly job has run yet'}
-          hint="Turn on nightly runs in a doc set's settings, then wait for the next night or press “Run now”." />
+        <EmptyState
+          title={result ? 'The last nightly job had nothing to do' : 'No nightly job has run yet'}
+          hint="Turn on nightly runs in a doc set's settings, then wait for the next night or press “Run now”."
+        />
       </Paper>
     );
   }
   return (
     <Paper variant="outlined">
-      <Typography variant="h3" component="h2" sx={{ p: 2, pb: 0 }}>Last result per doc set</Typography>
+      <Typography variant="h3" component="h2" sx={{ p: 2, pb: 0 }}>
+        Last result per doc set
+      </Typography>
       <Table size="small" aria-label="Last result per doc set">
         <TableHead>
-          <TableRow><TableCell>Doc set</TableCell><TableCell>What it did</TableCell><TableCell>Outcome</TableCell><TableCell>Run</TableCell></TableRow>
+          <TableRow>
+            <TableCell>Doc set</TableCell>
+            <TableCell>What it did</TableCell>
+            <TableCell>Outcome</TableCell>
+            <TableCell>Run</TableCell>
+          </TableRow>
         </TableHead>
         <TableBody>
           {result.docSets.map((r) => (
@@ -34,10 +43,16 @@ export function LastResultTable({ result }: { result: NightlyResult | null }) {
               <TableCell>{r.action}</TableCell>
               <TableCell>
                 <Chip size="small" label={r.outcome} color={r.outcome === 'failed' ? 'error' : 'success'} variant="outlined" />
-                {r.message && <Typography variant="body2" color={r.outcome === 'failed' ? 'error' : 'text.secondary'} sx={{ mt: 0.5 }}>{r.message}</Typography>}
+                {r.message && (
+                  <Typography variant="body2" color={r.outcome === 'failed' ? 'error' : 'text.secondary'} sx={{ mt: 0.5 }}>
+                    {r.message}
+                  </Typography>
+                )}
               </TableCell>
               <TableCell>
-                <Link component={RouterLink} to={runLink(r)}>{r.outcome === 'finished' && r.runId ? 'Open findings of this run' : 'Open runs'}</Link>
+                <Link component={RouterLink} to={runLink(r)}>
+                  {r.outcome === 'finished' && r.runId ? 'Open findings of this run' : 'Open runs'}
+                </Link>
               </TableCell>
             </TableRow>
           ))}

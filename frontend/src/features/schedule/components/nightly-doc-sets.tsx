@@ -14,22 +14,39 @@ export function NightlyDocSets({ docSets }: { docSets: ScheduleStatus['docSets']
   }
   return (
     <Paper variant="outlined">
-      <Typography variant="h3" component="h2" sx={{ p: 2, pb: 0 }}>Doc sets</Typography>
+      <Typography variant="h3" component="h2" sx={{ p: 2, pb: 0 }}>
+        Doc sets
+      </Typography>
       <Table size="small" aria-label="Doc sets and nightly runs">
         <TableHead>
-          <TableRow><TableCell>Doc set</TableCell><TableCell>Nightly</TableCell><TableCell>Server folder</TableCell><TableCell>Settings</TableCell></TableRow>
+          <TableRow>
+            <TableCell>Doc set</TableCell>
+            <TableCell>Nightly</TableCell>
+            <TableCell>Server folder</TableCell>
+            <TableCell>Settings</TableCell>
+          </TableRow>
         </TableHead>
         <TableBody>
           {docSets.map((d) => (
             <TableRow key={d.id}>
               <TableCell>{d.name}</TableCell>
-              <TableCell><Chip size="small" label={d.nightly ? 'on' : 'off'} color={d.nightly ? 'success' : 'default'} variant="outlined" /></TableCell>
               <TableCell>
-                {d.sourceFolder
-                  ? <code>{d.sourceFolder}</code>
-                  : <Typography variant="body2" color="text.secondary">none: the latest snapshot is re-analysed</Typography>}
+                <Chip size="small" label={d.nightly ? 'on' : 'off'} color={d.nightly ? 'success' : 'default'} variant="outlined" />
               </TableCell>
-              <TableCell><Link component={RouterLink} to={`/doc-sets/${encodeURIComponent(d.id)}/settings`}>Change</Link></TableCell>
+              <TableCell>
+                {d.sourceFolder ? (
+                  <code>{d.sourceFolder}</code>
+                ) : (
+                  <Typography variant="body2" color="text.secondary">
+                    none: the latest snapshot is re-analysed
+                  </Typography>
+                )}
+              </TableCell>
+              <TableCell>
+                <Link component={RouterLink} to={`/doc-sets/${encodeURIComponent(d.id)}/settings`}>
+                  Change
+                </Link>
+              </TableCell>
             </TableRow>
           ))}
         </TableBody>

@@ -6,8 +6,12 @@ const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : 'no
 function Fact({ label, value }: { label: string; value: string }) {
   return (
     <Stack spacing={0.25} sx={{ minWidth: 180 }}>
-      <Typography variant="caption" color="text.secondary" component="dt">{label}</Typography>
-      <Typography variant="body1" component="dd" sx={{ m: 0 }}>{value}</Typography>
+      <Typography variant="caption" color="text.secondary" component="dt">
+        {label}
+      </Typography>
+      <Typography variant="body1" component="dd" sx={{ m: 0 }}>
+        {value}
+      </Typography>
     </Stack>
   );
 }
@@ -18,10 +22,16 @@ export function ScheduleSummary({ status }: { status: ScheduleStatus }) {
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <Stack direction="row" spacing={1} sx={{ mb: 2, alignItems: 'center' }}>
-        <Typography variant="h3" component="h2">Nightly job</Typography>
-        {status.running
-          ? <Chip size="small" color="info" label="Running now" role="status" />
-          : last && <Chip size="small" label={last.status === 'skipped' ? `Last run skipped${last.reason ? `: ${last.reason}` : ''}` : 'Idle'} />}
+        <Typography variant="h3" component="h2">
+          Nightly job
+        </Typography>
+        {status.running ? (
+          <Chip size="small" color="info" label="Running now" role="status" />
+        ) : (
+          last && (
+            <Chip size="small" label={last.status === 'skipped' ? `Last run skipped${last.reason ? `: ${last.reason}` : ''}` : 'Idle'} />
+          )
+        )}
       </Stack>
       <Stack component="dl" direction="row" sx={{ flexWrap: 'wrap', gap: 3, m: 0 }}>
         <Fact label="Every night at" value={`${status.nightlyTime} (${status.timeZone}, the server's time zone)`} />

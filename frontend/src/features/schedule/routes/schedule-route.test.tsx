@@ -8,12 +8,20 @@ import ScheduleRoute from './schedule-route.js';
 afterEach(() => vi.unstubAllGlobals());
 
 const idle = {
-  nightlyTime: '02:00', timeZone: 'Europe/Oslo', nextRunAt: '2026-12-02T01:00:00Z', running: false,
-  lastStartedAt: '2026-12-01T01:00:00Z', lastFinishedAt: '2026-12-01T01:04:00Z',
-  lastResult: { trigger: 'clock', status: 'finished', docSets: [
-    { docSetId: 'd1', name: 'Harbour guides', action: 're-read folder', outcome: 'finished', runId: 'r9' },
-    { docSetId: 'd2', name: 'Ferry manuals', action: 're-analysed', outcome: 'failed', message: 'snapshot is empty' },
-  ] },
+  nightlyTime: '02:00',
+  timeZone: 'Europe/Oslo',
+  nextRunAt: '2026-12-02T01:00:00Z',
+  running: false,
+  lastStartedAt: '2026-12-01T01:00:00Z',
+  lastFinishedAt: '2026-12-01T01:04:00Z',
+  lastResult: {
+    trigger: 'clock',
+    status: 'finished',
+    docSets: [
+      { docSetId: 'd1', name: 'Harbour guides', action: 're-read folder', outcome: 'finished', runId: 'r9' },
+      { docSetId: 'd2', name: 'Ferry manuals', action: 're-analysed', outcome: 'failed', message: 'snapshot is empty' },
+    ],
+  },
   docSets: [
     { id: 'd1', name: 'Harbour guides', nightly: true, sourceFolder: '/srv/docs/harbour' },
     { id: 'd2', name: 'Ferry manuals', nightly: true, sourceFolder: null },
@@ -32,7 +40,9 @@ describe('nightly runs screen', () => {
     vi.stubGlobal('fetch', fake.fn);
     renderWithProviders(<ScheduleRoute />, { route: '/admin/schedule' });
 
-    expect((await screen.findByRole('link', { name: 'Open findings of this run' })).getAttribute('href')).toBe('/doc-sets/d1/findings?run=r9');
+    expect((await screen.findByRole('link', { name: 'Open findings of this run' })).getAttribute('href')).toBe(
+      '/doc-sets/d1/findings?run=r9',
+    );
     expect(screen.getByText('snapshot is empty')).toBeTruthy();
     expect(screen.getByText('/srv/docs/harbour')).toBeTruthy();
 

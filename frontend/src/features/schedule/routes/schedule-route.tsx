@@ -38,13 +38,17 @@ export default function ScheduleRoute() {
 
   return (
     <>
-      <PageHeader title="Nightly runs"
+      <PageHeader
+        title="Nightly runs"
         subtitle="Each night Linkloom re-reads the server folder of every doc set with nightly runs on (or re-analyses its latest snapshot) and mails the digests."
-        actions={canRun && (
-          <Button variant="contained" startIcon={<PlayArrowOutlined />} onClick={start} disabled={busy || !data}>
-            {busy ? 'Running…' : 'Run now'}
-          </Button>
-        )} />
+        actions={
+          canRun && (
+            <Button variant="contained" startIcon={<PlayArrowOutlined />} onClick={start} disabled={busy || !data}>
+              {busy ? 'Running…' : 'Run now'}
+            </Button>
+          )
+        }
+      />
       <Stack spacing={3}>
         {runNow.data && !runNow.data.started && (
           <Alert severity="warning" role="alert" onClose={() => runNow.reset()}>
@@ -52,7 +56,9 @@ export default function ScheduleRoute() {
           </Alert>
         )}
         {schedule.isLoading && <LoadingSkeleton variant="cards" count={4} />}
-        {schedule.error && <ErrorPanel error={schedule.error} onRetry={() => schedule.refetch()} title="The schedule could not be loaded" />}
+        {schedule.error && (
+          <ErrorPanel error={schedule.error} onRetry={() => schedule.refetch()} title="The schedule could not be loaded" />
+        )}
         {data && (
           <>
             <ScheduleSummary status={data} />

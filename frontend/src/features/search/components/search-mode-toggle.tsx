@@ -16,7 +16,11 @@ export function SearchModeToggle({ mode, onChange }: { mode: SearchMode; onChang
   return (
     <Box>
       <ToggleButtonGroup size="small" exclusive value={mode} onChange={(_, v) => v && onChange(v)} aria-label="Ranking">
-        {(Object.keys(MODE_HELP) as SearchMode[]).map((m) => <ToggleButton key={m} value={m}>{MODE_HELP[m].label}</ToggleButton>)}
+        {(Object.keys(MODE_HELP) as SearchMode[]).map((m) => (
+          <ToggleButton key={m} value={m}>
+            {MODE_HELP[m].label}
+          </ToggleButton>
+        ))}
       </ToggleButtonGroup>
       <Box component="ul" sx={{ m: 0, mt: 1, pl: 2.5 }}>
         {(Object.keys(MODE_HELP) as SearchMode[]).map((m) => (

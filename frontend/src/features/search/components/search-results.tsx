@@ -9,10 +9,20 @@ const figure = (v: number) => (Number.isFinite(v) ? (Math.abs(v) >= 0.01 || v ==
 function Figures({ hit }: { hit: SearchHit }) {
   return (
     <Stack direction="row" spacing={2} sx={{ flexWrap: 'wrap' }} component="dl" aria-label="Scores">
-      {([['Text match', figure(hit.textRank)], ['Stationary score', formatScore(hit.stationaryScore)], ['Combined', figure(hit.score)]] as const).map(([k, v]) => (
+      {(
+        [
+          ['Text match', figure(hit.textRank)],
+          ['Stationary score', formatScore(hit.stationaryScore)],
+          ['Combined', figure(hit.score)],
+        ] as const
+      ).map(([k, v]) => (
         <Box key={k} sx={{ display: 'flex', gap: 0.5 }}>
-          <Typography component="dt" variant="caption" color="text.secondary">{k}</Typography>
-          <Typography component="dd" variant="caption" sx={{ m: 0, fontWeight: 500 }}>{v}</Typography>
+          <Typography component="dt" variant="caption" color="text.secondary">
+            {k}
+          </Typography>
+          <Typography component="dd" variant="caption" sx={{ m: 0, fontWeight: 500 }}>
+            {v}
+          </Typography>
         </Box>
       ))}
     </Stack>
@@ -26,13 +36,25 @@ export function SearchResults({ hits, docSetId, runId }: { hits: SearchHit[]; do
       {hits.map((hit, i) => (
         <ListItem key={hit.path} disableGutters divider sx={{ display: 'block', py: 1.5 }}>
           <Typography variant="h3" component="h2" sx={{ fontSize: '1.05rem' }}>
-            <Typography component="span" color="text.secondary" sx={{ mr: 1 }}>{i + 1}.</Typography>
-            <Link component={RouterLink} to={pageDetailHref(docSetId, hit.path, runId)}>{hit.title || hit.path}</Link>
+            <Typography component="span" color="text.secondary" sx={{ mr: 1 }}>
+              {i + 1}.
+            </Typography>
+            <Link component={RouterLink} to={pageDetailHref(docSetId, hit.path, runId)}>
+              {hit.title || hit.path}
+            </Link>
           </Typography>
-          <Typography variant="caption" color="text.secondary" component="div" sx={{ wordBreak: 'break-all' }}>{hit.path}</Typography>
-          <Typography variant="body2" sx={{ my: 0.5 }}><HighlightedText text={hit.snippet ?? ''} /></Typography>
+          <Typography variant="caption" color="text.secondary" component="div" sx={{ wordBreak: 'break-all' }}>
+            {hit.path}
+          </Typography>
+          <Typography variant="body2" sx={{ my: 0.5 }}>
+            <HighlightedText text={hit.snippet ?? ''} />
+          </Typography>
           <Figures hit={hit} />
-          {hit.why && <Typography variant="caption" color="text.secondary" component="p">Why here: {hit.why}</Typography>}
+          {hit.why && (
+            <Typography variant="caption" color="text.secondary" component="p">
+              Why here: {hit.why}
+            </Typography>
+          )}
         </ListItem>
       ))}
     </List>

@@ -13,12 +13,19 @@ function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest/search': (url) => ({
       body: {
-        items: [{
-          path: 'brakes/bleeding.md', title: `Bleeding ${ATTACK} brakes`,
-          snippet: `Before you «bleed» the lines ${ATTACK} check the «pads».`,
-          textRank: 0.42, stationaryScore: 0.031, score: 0.37, why: `Strong text match; linked from 9 pages (${url.searchParams.get('mode')})`,
-        }],
-        explanation: 'Ranked by text match and link score.', total: 1,
+        items: [
+          {
+            path: 'brakes/bleeding.md',
+            title: `Bleeding ${ATTACK} brakes`,
+            snippet: `Before you «bleed» the lines ${ATTACK} check the «pads».`,
+            textRank: 0.42,
+            stationaryScore: 0.031,
+            score: 0.37,
+            why: `Strong text match; linked from 9 pages (${url.searchParams.get('mode')})`,
+          },
+        ],
+        explanation: 'Ranked by text match and link score.',
+        total: 1,
       },
     }),
   });
@@ -30,7 +37,10 @@ describe('search', () => {
     const fake = api();
     vi.stubGlobal('fetch', fake.fn);
     const user = userEvent.setup();
-    const { container, router } = renderWithProviders(<SearchRoute />, { route: '/doc-sets/d1/search', path: '/doc-sets/:docSetId/search' });
+    const { container, router } = renderWithProviders(<SearchRoute />, {
+      route: '/doc-sets/d1/search',
+      path: '/doc-sets/:docSetId/search',
+    });
     await user.type(screen.getByLabelText('Words to find'), 'bleed pads{Enter}');
     await screen.findByText(/Strong text match/);
     expect(router.state.location.search).toBe('?q=bleed+pads');

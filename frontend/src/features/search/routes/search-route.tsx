@@ -31,25 +31,38 @@ export default function SearchRoute() {
       <Paper variant="outlined" sx={{ p: 2, mb: 3 }}>
         <Stack spacing={2}>
           <Stack component="form" role="search" onSubmit={submit} direction="row" spacing={1}>
-            <TextField size="small" label="Words to find" value={text} onChange={(e) => setText(e.target.value)} sx={{ flex: 1, maxWidth: 640 }} autoFocus />
-            <Button type="submit" variant="contained" startIcon={<SearchOutlined />}>Search</Button>
+            <TextField
+              size="small"
+              label="Words to find"
+              value={text}
+              onChange={(e) => setText(e.target.value)}
+              sx={{ flex: 1, maxWidth: 640 }}
+              autoFocus
+            />
+            <Button type="submit" variant="contained" startIcon={<SearchOutlined />}>
+              Search
+            </Button>
           </Stack>
           <SearchModeToggle mode={mode} onChange={(m) => setState({ mode: m })} />
         </Stack>
       </Paper>
       {!state.q ? (
         <EmptyState title="Type some words and press Enter" hint="Search looks in page titles and text of the latest analysis." />
-      ) : results.isLoading ? <LoadingSkeleton count={6} /> : results.error ? (
+      ) : results.isLoading ? (
+        <LoadingSkeleton count={6} />
+      ) : results.error ? (
         <AnalysisError docSetId={docSetId} error={results.error} onRetry={() => results.refetch()} />
       ) : results.data && results.data.items.length === 0 ? (
         <EmptyState title={`No page mentions "${state.q}"`} hint="Try fewer or different words, or check the spelling." />
-      ) : results.data && (
-        <Stack spacing={1} aria-busy={results.isFetching ? 'true' : 'false'}>
-          <Typography variant="body2" color="text.secondary">
-            {results.data.total} page{results.data.total === 1 ? '' : 's'} found. {results.data.explanation}
-          </Typography>
-          <SearchResults hits={results.data.items} docSetId={docSetId} runId={runId} />
-        </Stack>
+      ) : (
+        results.data && (
+          <Stack spacing={1} aria-busy={results.isFetching ? 'true' : 'false'}>
+            <Typography variant="body2" color="text.secondary">
+              {results.data.total} page{results.data.total === 1 ? '' : 's'} found. {results.data.explanation}
+            </Typography>
+            <SearchResults hits={results.data.items} docSetId={docSetId} runId={runId} />
+          </Stack>
+        )
       )}
     </>
   );

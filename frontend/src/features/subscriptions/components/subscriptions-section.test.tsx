@@ -21,7 +21,17 @@ function api() {
       stored = (JSON.parse(String(init?.body)) as { subscriptions: typeof stored }).subscriptions;
       return { body: { subscriptions: stored } };
     },
-    'GET /api/doc-sets': () => ({ body: { items: [{ id: HARBOUR, name: 'Harbour guides' }, { id: FERRY, name: 'Ferry manuals' }], total: 2, page: 1, pageSize: 500 } }),
+    'GET /api/doc-sets': () => ({
+      body: {
+        items: [
+          { id: HARBOUR, name: 'Harbour guides' },
+          { id: FERRY, name: 'Ferry manuals' },
+        ],
+        total: 2,
+        page: 1,
+        pageSize: 500,
+      },
+    }),
   });
 }
 
@@ -39,18 +49,26 @@ describe('digest subscriptions', () => {
     expect(ferryQuiet.disabled).toBe(true);
 
     await userEvent.click(ferryDigest);
-    await vi.waitFor(() => expect(lastPut(fake.calls)).toEqual({ subscriptions: [
-      { docSetId: HARBOUR, digest: true, nothingChanged: false },
-      { docSetId: FERRY, digest: true, nothingChanged: false },
-    ] }));
+    await vi.waitFor(() =>
+      expect(lastPut(fake.calls)).toEqual({
+        subscriptions: [
+          { docSetId: HARBOUR, digest: true, nothingChanged: false },
+          { docSetId: FERRY, digest: true, nothingChanged: false },
+        ],
+      }),
+    );
     await vi.waitFor(() => expect(ferryQuiet.disabled).toBe(false));
     expect(await screen.findByText('All choices saved.')).toBeTruthy();
 
     await userEvent.click(screen.getByRole('switch', { name: 'Also when nothing changed for Harbour guides' }));
-    await vi.waitFor(() => expect(lastPut(fake.calls)).toEqual({ subscriptions: [
-      { docSetId: HARBOUR, digest: true, nothingChanged: true },
-      { docSetId: FERRY, digest: true, nothingChanged: false },
-    ] }));
+    await vi.waitFor(() =>
+      expect(lastPut(fake.calls)).toEqual({
+        subscriptions: [
+          { docSetId: HARBOUR, digest: true, nothingChanged: true },
+          { docSetId: FERRY, digest: true, nothingChanged: false },
+        ],
+      }),
+    );
   });
 
   it('clears "also when nothing changed" when the digest is turned off', async () => {
@@ -62,10 +80,18 @@ describe('digest subscriptions', () => {
     await vi.waitFor(() => expect(fake.calls.filter((c) => c.method === 'PUT')).toHaveLength(1));
     await screen.findByText('All choices saved.');
     await userEvent.click(screen.getByRole('switch', { name: 'Nightly digest for Harbour guides' }));
-    await vi.waitFor(() => expect(lastPut(fake.calls)).toEqual({ subscriptions: [
-      { docSetId: HARBOUR, digest: false, nothingChanged: false },
-      { docSetId: FERRY, digest: false, nothingChanged: false },
-    ] }));
-    await vi.waitFor(() => expect((screen.getByRole('switch', { name: 'Also when nothing changed for Harbour guides' }) as HTMLInputElement).disabled).toBe(true));
+    await vi.waitFor(() =>
+      expect(lastPut(fake.calls)).toEqual({
+        subscriptions: [
+          { docSetId: HARBOUR, digest: false, nothingChanged: false },
+          { docSetId: FERRY, digest: false, nothingChanged: false },
+        ],
+      }),
+    );
+    await vi.waitFor(() =>
+      expect((screen.getByRole('switch', { name: 'Also when nothing changed for Harbour guides' }) as HTMLInputElement).disabled).toBe(
+        true,
+      ),
+    );
   });
 });

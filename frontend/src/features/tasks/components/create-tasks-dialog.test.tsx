@@ -9,8 +9,18 @@ afterEach(() => vi.unstubAllGlobals());
 
 function api() {
   return fakeFetch({
-    'GET /api/tasks/assignees': () => ({ body: { items: [{ id: 'u-w', name: 'Wren Writer', email: 'w@x.test', role: 'writer' }], total: 1, page: 1, pageSize: 1 } }),
-    'POST /api/tasks/bulk': () => ({ status: 201, body: { items: [{ id: 't1', assignee: { id: 'u-w' } }, { id: 't2', assignee: { id: 'u-w' } }] } }),
+    'GET /api/tasks/assignees': () => ({
+      body: { items: [{ id: 'u-w', name: 'Wren Writer', email: 'w@x.test', role: 'writer' }], total: 1, page: 1, pageSize: 1 },
+    }),
+    'POST /api/tasks/bulk': () => ({
+      status: 201,
+      body: {
+        items: [
+          { id: 't1', assignee: { id: 'u-w' } },
+          { id: 't2', assignee: { id: 'u-w' } },
+        ],
+      },
+    }),
   });
 }
 
@@ -21,22 +31,32 @@ describe('create tasks dialog', () => {
     vi.stubGlobal('fetch', fake.fn);
     const onClose = vi.fn();
     const user = userEvent.setup();
-    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md', 'b.md'], kind: 'add-inbound-links' }} onClose={onClose} />,
-      { route: '/doc-sets/d1/findings', path: '/doc-sets/:docSetId/findings' });
+    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md', 'b.md'], kind: 'add-inbound-links' }} onClose={onClose} />, {
+      route: '/doc-sets/d1/findings',
+      path: '/doc-sets/:docSetId/findings',
+    });
     expect(await screen.findByText('Create 2 tasks', { selector: 'h2' })).toBeTruthy();
     await user.click(screen.getByLabelText('Assignee'));
     await user.click(await screen.findByRole('option', { name: 'Wren Writer (writer)' }));
     await user.click(screen.getByRole('button', { name: 'Create 2 tasks' }));
     await vi.waitFor(() => expect(onClose).toHaveBeenCalled());
     const post = fake.calls.find((c) => c.method === 'POST')!;
-    expect(post.body).toMatchObject({ docSetId: 'd1', kind: 'add-inbound-links', pagePaths: ['a.md', 'b.md'], assigneeId: 'u-w', priority: 'normal' });
+    expect(post.body).toMatchObject({
+      docSetId: 'd1',
+      kind: 'add-inbound-links',
+      pagePaths: ['a.md', 'b.md'],
+      assigneeId: 'u-w',
+      priority: 'normal',
+    });
   });
 
   it('renders nothing for writers, who cannot create tasks', () => {
     signInAs('writer');
     vi.stubGlobal('fetch', api().fn);
-    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md'], kind: 'other' }} onClose={() => undefined} />,
-      { route: '/doc-sets/d1/page', path: '/doc-sets/:docSetId/page' });
+    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md'], kind: 'other' }} onClose={() => undefined} />, {
+      route: '/doc-sets/d1/page',
+      path: '/doc-sets/:docSetId/page',
+    });
     expect(screen.queryByRole('dialog')).toBeNull();
   });
 });

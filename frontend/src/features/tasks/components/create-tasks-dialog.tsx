@@ -52,8 +52,16 @@ export function CreateTasksDialog({ request, onClose, docSetId }: Props) {
     event.preventDefault();
     if (!request) return;
     create.mutate(
-      { docSetId: targetDocSet, kind, pagePaths: request.pagePaths, title: count === 1 && title.trim() ? title.trim() : undefined,
-        details: details.trim() || undefined, assigneeId: assigneeId || undefined, priority, dueDate: dueDate || undefined },
+      {
+        docSetId: targetDocSet,
+        kind,
+        pagePaths: request.pagePaths,
+        title: count === 1 && title.trim() ? title.trim() : undefined,
+        details: details.trim() || undefined,
+        assigneeId: assigneeId || undefined,
+        priority,
+        dueDate: dueDate || undefined,
+      },
       {
         onSuccess: ({ items }) => {
           const unassigned = items.filter((t) => !t.assignee).length;
@@ -77,27 +85,65 @@ export function CreateTasksDialog({ request, onClose, docSetId }: Props) {
               {count === 1 ? request?.pagePaths[0] : `One task for each of ${count} pages.`} The details list what the latest run found.
             </Typography>
             <TextField select label="Kind" value={kind} onChange={(e) => setKind(e.target.value as TaskKind)}>
-              {TASK_KINDS.map((k) => <MenuItem key={k} value={k}>{KIND_LABELS[k]}</MenuItem>)}
+              {TASK_KINDS.map((k) => (
+                <MenuItem key={k} value={k}>
+                  {KIND_LABELS[k]}
+                </MenuItem>
+              ))}
             </TextField>
-            {count === 1 && <TextField label="Title" value={title} onChange={(e) => setTitle(e.target.value)} helperText="Leave empty for a title made from the finding." />}
-            <TextField select label="Assignee" value={assigneeId} onChange={(e) => setAssigneeId(e.target.value)}
-              helperText="By default, the page owner named in its front matter (when that person has an account).">
+            {count === 1 && (
+              <TextField
+                label="Title"
+                value={title}
+                onChange={(e) => setTitle(e.target.value)}
+                helperText="Leave empty for a title made from the finding."
+              />
+            )}
+            <TextField
+              select
+              label="Assignee"
+              value={assigneeId}
+              onChange={(e) => setAssigneeId(e.target.value)}
+              helperText="By default, the page owner named in its front matter (when that person has an account)."
+            >
               <MenuItem value={OWNER}>Page owner</MenuItem>
-              {(assignees.data?.items ?? []).map((a) => <MenuItem key={a.id} value={a.id}>{a.name} ({a.role})</MenuItem>)}
+              {(assignees.data?.items ?? []).map((a) => (
+                <MenuItem key={a.id} value={a.id}>
+                  {a.name} ({a.role})
+                </MenuItem>
+              ))}
             </TextField>
             <Stack direction="row" spacing={2}>
-              <TextField select label="Priority" value={priority} onChange={(e) => setPriority(e.target.value as Priority)} sx={{ flex: 1 }}>
-                {PRIORITIES.map((p) => <MenuItem key={p} value={p}>{p}</MenuItem>)}
+              <TextField
+                select
+                label="Priority"
+                value={priority}
+                onChange={(e) => setPriority(e.target.value as Priority)}
+                sx={{ flex: 1 }}
+              >
+                {PRIORITIES.map((p) => (
+                  <MenuItem key={p} value={p}>
+                    {p}
+                  </MenuItem>
+                ))}
               </TextField>
-              <TextField label="Due date" type="date" value={dueDate} onChange={(e) => setDueDate(e.target.value)} sx={{ flex: 1 }}
-                slotProps={{ inputLabel: { shrink: true } }} />
+              <TextField
+                label="Due date"
+                type="date"
+                value={dueDate}
+                onChange={(e) => setDueDate(e.target.value)}
+                sx={{ flex: 1 }}
+                slotProps={{ inputLabel: { shrink: true } }}
+              />
             </Stack>
             <TextField label="Note for the assignee" value={details} onChange={(e) => setDetails(e.target.value)} multiline minRows={2} />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" disabled={create.isPending || !targetDocSet}>{count === 1 ? 'Create task' : `Create ${count} tasks`}</Button>
+          <Button type="submit" variant="contained" disabled={create.isPending || !targetDocSet}>
+            {count === 1 ? 'Create task' : `Create ${count} tasks`}
+          </Button>
         </DialogActions>
       </form>
     </Dialog>

@@ -10,16 +10,25 @@ export function PageTasksPanel({ docSetId, pagePath }: { docSetId: string; pageP
   const items = tasks.data?.items ?? [];
   return (
     <Paper variant="outlined" sx={{ p: 2 }} aria-label="Tasks on this page" component="section">
-      <Typography variant="h3" sx={{ mb: 1 }}>Tasks on this page</Typography>
+      <Typography variant="h3" sx={{ mb: 1 }}>
+        Tasks on this page
+      </Typography>
       {items.length === 0 ? (
-        <Typography variant="body2" color="text.secondary">{tasks.isLoading ? 'Loading…' : 'No tasks for this page yet.'}</Typography>
+        <Typography variant="body2" color="text.secondary">
+          {tasks.isLoading ? 'Loading…' : 'No tasks for this page yet.'}
+        </Typography>
       ) : (
         <List dense>
           {items.map((t) => (
             <ListItem key={t.id} disableGutters secondaryAction={<TaskStatusChips task={t} />}>
               <ListItemText
-                primary={<Link component={RouterLink} to={`/tasks?view=all&task=${encodeURIComponent(t.id)}`}>{t.title}</Link>}
-                secondary={`${KIND_LABELS[t.kind]} · ${t.assignee?.name ?? 'unassigned'}${t.dueDate ? ` · due ${t.dueDate}` : ''}`} />
+                primary={
+                  <Link component={RouterLink} to={`/tasks?view=all&task=${encodeURIComponent(t.id)}`}>
+                    {t.title}
+                  </Link>
+                }
+                secondary={`${KIND_LABELS[t.kind]} · ${t.assignee?.name ?? 'unassigned'}${t.dueDate ? ` · due ${t.dueDate}` : ''}`}
+              />
             </ListItem>
           ))}
         </List>

@@ -5,8 +5,25 @@ import { TaskStatusChips } from './task-chips.js';
 
 /** Sortable ids match the API's sort keys (dueDate, priority, pagePath, status, createdAt). */
 export const taskColumns: ColumnDef<Task, unknown>[] = [
-  { id: 'title', header: 'Task', enableSorting: false, cell: ({ row }) => <Typography variant="body2" sx={{ fontWeight: 500 }}>{row.original.title}</Typography> },
-  { id: 'pagePath', header: 'Page', cell: ({ row }) => <Typography variant="body2" sx={{ wordBreak: 'break-all' }}>{row.original.pagePath}</Typography> },
+  {
+    id: 'title',
+    header: 'Task',
+    enableSorting: false,
+    cell: ({ row }) => (
+      <Typography variant="body2" sx={{ fontWeight: 500 }}>
+        {row.original.title}
+      </Typography>
+    ),
+  },
+  {
+    id: 'pagePath',
+    header: 'Page',
+    cell: ({ row }) => (
+      <Typography variant="body2" sx={{ wordBreak: 'break-all' }}>
+        {row.original.pagePath}
+      </Typography>
+    ),
+  },
   { id: 'kind', header: 'Kind', enableSorting: false, cell: ({ row }) => KIND_LABELS[row.original.kind] },
   { id: 'docSet', header: 'Doc set', enableSorting: false, cell: ({ row }) => row.original.docSetName ?? '' },
   { id: 'assignee', header: 'Assignee', enableSorting: false, cell: ({ row }) => row.original.assignee?.name ?? '—' },

@@ -27,13 +27,26 @@ export function TaskDetailDrawer({ taskId, onClose }: { taskId: string | null; o
   const own = !!data && data.assignee?.id === me;
   const canWork = isEditor || (isWriter && own);
   const patch = (change: Omit<UpdateTaskInput, 'id'>) =>
-    update.mutate({ id: data!.id, ...change }, { onSuccess: () => { notify('Task updated'); void task.refetch(); }, onError: (e) => notify(errorMessage(e), 'error') });
+    update.mutate(
+      { id: data!.id, ...change },
+      {
+        onSuccess: () => {
+          notify('Task updated');
+          void task.refetch();
+        },
+        onError: (e) => notify(errorMessage(e), 'error'),
+      },
+    );
 
   return (
     <Drawer anchor="right" open={taskId !== null} onClose={onClose} slotProps={{ paper: { sx: { width: { xs: '100%', md: 560 }, p: 3 } } }}>
       <Box sx={{ display: 'flex', alignItems: 'flex-start', gap: 1, mb: 2 }}>
-        <Typography variant="h2" sx={{ flex: 1, wordBreak: 'break-word' }}>{data?.title ?? 'Task'}</Typography>
-        <IconButton aria-label="Close task" onClick={onClose}><CloseOutlined /></IconButton>
+        <Typography variant="h2" sx={{ flex: 1, wordBreak: 'break-word' }}>
+          {data?.title ?? 'Task'}
+        </Typography>
+        <IconButton aria-label="Close task" onClick={onClose}>
+          <CloseOutlined />
+        </IconButton>
       </Box>
       {task.isLoading && <LoadingSkeleton variant="cards" count={3} />}
       {task.error && <ErrorPanel error={task.error} onRetry={() => task.refetch()} />}
@@ -42,21 +55,55 @@ export function TaskDetailDrawer({ taskId, onClose }: { taskId: string | null; o
           <TaskStatusChips task={data} />
           <Typography variant="body2">
             {KIND_LABELS[data.kind]} · {data.docSetName} ·{' '}
-            <Link component={RouterLink} to={`/doc-sets/${encodeURIComponent(data.docSetId)}/page?path=${encodeURIComponent(data.pagePath)}`}>{data.pagePath}</Link>
+            <Link
+              component={RouterLink}
+              to={`/doc-sets/${encodeURIComponent(data.docSetId)}/page?path=${encodeURIComponent(data.pagePath)}`}
+            >
+              {data.pagePath}
+            </Link>
           </Typography>
           <Typography variant="body2" color="text.secondary">
-            Priority {data.priority}{data.dueDate ? ` · due ${data.dueDate}` : ''} · assigned to {data.assignee?.name ?? 'nobody yet'}
+            Priority {data.priority}
+            {data.dueDate ? ` · due ${data.dueDate}` : ''} · assigned to {data.assignee?.name ?? 'nobody yet'}
           </Typography>
-          {data.details && <Typography component="pre" variant="body2" sx={{ whiteSpace: 'pre-wrap', fontFamily: 'inherit', m: 0, p: 1.5, bgcolor: 'action.hover', borderRadius: 1 }}>{data.details}</Typography>}
+          {data.details && (
+            <Typography
+              component="pre"
+              variant="body2"
+              sx={{ whiteSpace: 'pre-wrap', fontFamily: 'inherit', m: 0, p: 1.5, bgcolor: 'action.hover', borderRadius: 1 }}
+            >
+              {data.details}
+            </Typography>
+          )}
           {canWork && (
             <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-              <TextField select label="Status" value={data.status} onChange={(e) => patch({ status: e.target.value as TaskStatus })} sx={{ flex: 1 }}>
-                {TASK_STATUSES.map((s) => <MenuItem key={s} value={s}>{STATUS_LABELS[s]}</MenuItem>)}
+              <TextField
+                select
+                label="Status"
+                value={data.status}
+                onChange={(e) => patch({ status: e.target.value as TaskStatus })}
+                sx={{ flex: 1 }}
+              >
+                {TASK_STATUSES.map((s) => (
+                  <MenuItem key={s} value={s}>
+                    {STATUS_LABELS[s]}
+                  </MenuItem>
+                ))}
               </TextField>
               {isEditor && (
-                <TextField select label="Assignee" value={data.assignee?.id ?? ''} onChange={(e) => patch({ assigneeId: e.target.value || null })} sx={{ flex: 1 }}>
+                <TextField
+                  select
+                  label="Assignee"
+                  value={data.assignee?.id ?? ''}
+                  onChange={(e) => patch({ assigneeId: e.target.value || null })}
+                  sx={{ flex: 1 }}
+                >
                   <MenuItem value="">Nobody</MenuItem>
-                  {(assignees.data?.items ?? []).map((a) => <MenuItem key={a.id} value={a.id}>{a.name}</MenuItem>)}
+                  {(assignees.data?.items ?? []).map((a) => (
+                    <MenuItem key={a.id} value={a.id}>
+                      {a.name}
+                    </MenuItem>
+                  ))}
                 </TextField>
               )}
             </Stack>

@@ -24,26 +24,78 @@ export function TaskFilters({ value, onChange, assignees, showAssignee }: Props)
   const docSets = useDocSets();
   return (
     <Stack direction="row" spacing={1.5} sx={{ mb: 2, flexWrap: 'wrap', rowGap: 1.5 }}>
-      <TextField select size="small" label="Doc set" value={value.docSetId} onChange={(e) => onChange({ docSetId: e.target.value })} sx={{ minWidth: 180 }}>
+      <TextField
+        select
+        size="small"
+        label="Doc set"
+        value={value.docSetId}
+        onChange={(e) => onChange({ docSetId: e.target.value })}
+        sx={{ minWidth: 180 }}
+      >
         <MenuItem value="">All doc sets</MenuItem>
-        {(docSets.data ?? []).map((d) => <MenuItem key={d.id} value={d.id}>{d.name}</MenuItem>)}
+        {(docSets.data ?? []).map((d) => (
+          <MenuItem key={d.id} value={d.id}>
+            {d.name}
+          </MenuItem>
+        ))}
       </TextField>
       {showAssignee && (
-        <TextField select size="small" label="Assignee" value={value.assignee} onChange={(e) => onChange({ assignee: e.target.value })} sx={{ minWidth: 180 }}>
+        <TextField
+          select
+          size="small"
+          label="Assignee"
+          value={value.assignee}
+          onChange={(e) => onChange({ assignee: e.target.value })}
+          sx={{ minWidth: 180 }}
+        >
           <MenuItem value="">Anyone</MenuItem>
-          {assignees.map((a) => <MenuItem key={a.id} value={a.id}>{a.name}</MenuItem>)}
+          {assignees.map((a) => (
+            <MenuItem key={a.id} value={a.id}>
+              {a.name}
+            </MenuItem>
+          ))}
         </TextField>
       )}
-      <TextField select size="small" label="Status" value={value.status} sx={{ minWidth: 180 }}
-        slotProps={{ select: { multiple: true, renderValue: (v) => ((v as string[]).length ? (v as string[]).map((s) => STATUS_LABELS[s as keyof typeof STATUS_LABELS]).join(', ') : 'Any') } }}
-        onChange={(e) => onChange({ status: e.target.value as unknown as string[] })}>
-        {TASK_STATUSES.map((s) => <MenuItem key={s} value={s}>{STATUS_LABELS[s]}</MenuItem>)}
+      <TextField
+        select
+        size="small"
+        label="Status"
+        value={value.status}
+        sx={{ minWidth: 180 }}
+        slotProps={{
+          select: {
+            multiple: true,
+            renderValue: (v) =>
+              (v as string[]).length ? (v as string[]).map((s) => STATUS_LABELS[s as keyof typeof STATUS_LABELS]).join(', ') : 'Any',
+          },
+        }}
+        onChange={(e) => onChange({ status: e.target.value as unknown as string[] })}
+      >
+        {TASK_STATUSES.map((s) => (
+          <MenuItem key={s} value={s}>
+            {STATUS_LABELS[s]}
+          </MenuItem>
+        ))}
       </TextField>
-      <TextField select size="small" label="Kind" value={value.kind} onChange={(e) => onChange({ kind: e.target.value })} sx={{ minWidth: 180 }}>
+      <TextField
+        select
+        size="small"
+        label="Kind"
+        value={value.kind}
+        onChange={(e) => onChange({ kind: e.target.value })}
+        sx={{ minWidth: 180 }}
+      >
         <MenuItem value="">Any kind</MenuItem>
-        {TASK_KINDS.map((k) => <MenuItem key={k} value={k}>{KIND_LABELS[k]}</MenuItem>)}
+        {TASK_KINDS.map((k) => (
+          <MenuItem key={k} value={k}>
+            {KIND_LABELS[k]}
+          </MenuItem>
+        ))}
       </TextField>
-      <FormControlLabel control={<Switch checked={value.overdue} onChange={(e) => onChange({ overdue: e.target.checked })} />} label="Overdue only" />
+      <FormControlLabel
+        control={<Switch checked={value.overdue} onChange={(e) => onChange({ overdue: e.target.checked })} />}
+        label="Overdue only"
+      />
     </Stack>
   );
 }

@@ -11,7 +11,9 @@ const FIELD_NAMES: Record<string, string> = { assigneeId: 'assignee', dueDate: '
 const describeChange = (changes: TaskEvent['changes']) =>
   Object.entries(changes)
     .filter(([, { from, to }]) => from !== to)
-    .map(([field, { from, to }]) => (field === 'assigneeId' ? (to ? 'assignee set' : 'assignee cleared') : `${FIELD_NAMES[field] ?? field}: ${from ?? '—'} → ${to ?? '—'}`))
+    .map(([field, { from, to }]) =>
+      field === 'assigneeId' ? (to ? 'assignee set' : 'assignee cleared') : `${FIELD_NAMES[field] ?? field}: ${from ?? '—'} → ${to ?? '—'}`,
+    )
     .join('; ');
 
 /** Comments and history in one time line, oldest first; the comment box only for those who may comment. */
@@ -26,21 +28,28 @@ export function TaskThread({ taskId, events, canComment }: { taskId: string; eve
   };
   return (
     <Box>
-      <Typography variant="h3" sx={{ mb: 1 }}>Comments and history</Typography>
+      <Typography variant="h3" sx={{ mb: 1 }}>
+        Comments and history
+      </Typography>
       <List dense aria-label="Comments and history">
         {events.map((e) => (
           <ListItem key={e.id} disableGutters alignItems="flex-start">
             <ListItemText
               primary={e.type === 'comment' ? e.body : [e.body, describeChange(e.changes)].filter(Boolean).join(' ')}
               secondary={`${e.actor.name} · ${new Date(e.at).toLocaleString()}${e.type === 'change' ? ' · change' : ''}`}
-              slotProps={{ primary: { sx: { whiteSpace: 'pre-wrap', fontStyle: e.type === 'change' ? 'italic' : 'normal' } } }} />
+              slotProps={{ primary: { sx: { whiteSpace: 'pre-wrap', fontStyle: e.type === 'change' ? 'italic' : 'normal' } } }}
+            />
           </ListItem>
         ))}
       </List>
       {canComment && (
         <Stack component="form" onSubmit={submit} spacing={1} aria-label="Add a comment">
           <TextField label="Comment" value={body} onChange={(e) => setBody(e.target.value)} multiline minRows={2} />
-          <Box><Button type="submit" variant="outlined" disabled={add.isPending || !body.trim()}>Add comment</Button></Box>
+          <Box>
+            <Button type="submit" variant="outlined" disabled={add.isPending || !body.trim()}>
+              Add comment
+            </Button>
+          </Box>
         </Stack>
       )}
     </Box>

@@ -11,7 +11,18 @@ import { TaskDetailDrawer } from '../components/task-detail-drawer.js';
 import { TaskFilters } from '../components/task-filters.js';
 import type { TaskKind } from '../types.js';
 
-const DEFAULTS = { view: 'mine', docSetId: '', assignee: '', status: ['open', 'in-progress'] as string[], kind: '', overdue: false, page: 1, pageSize: 50, sort: '', task: '' };
+const DEFAULTS = {
+  view: 'mine',
+  docSetId: '',
+  assignee: '',
+  status: ['open', 'in-progress'] as string[],
+  kind: '',
+  overdue: false,
+  page: 1,
+  pageSize: 50,
+  sort: '',
+  task: '',
+};
 
 /** "My tasks" and, for everyone but writers, "All tasks"; the open task shows in a side panel (`?task=`). */
 export default function TasksRoute() {
@@ -21,12 +32,21 @@ export default function TasksRoute() {
   const mine = state.view === 'mine' || isWriterOnly;
   const assignees = useAssignees(isEditor);
   const tasks = useTasks({
-    assignee: mine ? 'me' : state.assignee || undefined, status: state.status, kind: (state.kind || undefined) as TaskKind | undefined,
-    docSetId: state.docSetId || undefined, overdue: state.overdue, page: state.page, pageSize: state.pageSize, sort: state.sort || undefined,
+    assignee: mine ? 'me' : state.assignee || undefined,
+    status: state.status,
+    kind: (state.kind || undefined) as TaskKind | undefined,
+    docSetId: state.docSetId || undefined,
+    overdue: state.overdue,
+    page: state.page,
+    pageSize: state.pageSize,
+    sort: state.sort || undefined,
   });
   return (
     <>
-      <PageHeader title={mine ? 'My tasks' : 'All tasks'} subtitle="Fix work made from findings. A task counts as verified when a later run no longer shows its finding." />
+      <PageHeader
+        title={mine ? 'My tasks' : 'All tasks'}
+        subtitle="Fix work made from findings. A task counts as verified when a later run no longer shows its finding."
+      />
       {!isWriterOnly && (
         <Tabs value={mine ? 'mine' : 'all'} onChange={(_, view) => setState({ view })} sx={{ mb: 2 }} aria-label="Task lists">
           <Tab value="mine" label="My tasks" />
@@ -34,12 +54,29 @@ export default function TasksRoute() {
         </Tabs>
       )}
       <TaskFilters value={state} onChange={setState} assignees={assignees.data?.items ?? []} showAssignee={!mine && isEditor} />
-      <DataTable label={mine ? 'My tasks' : 'All tasks'} columns={taskColumns} data={tasks.data?.items} total={tasks.data?.total ?? 0}
-        page={state.page} pageSize={state.pageSize} sort={state.sort}
-        onPageChange={(page) => setState({ page })} onPageSizeChange={(pageSize) => setState({ pageSize })} onSortChange={(sort) => setState({ sort })}
-        loading={tasks.isFetching} error={tasks.error} onRetry={() => tasks.refetch()} rowId={(t) => t.id}
+      <DataTable
+        label={mine ? 'My tasks' : 'All tasks'}
+        columns={taskColumns}
+        data={tasks.data?.items}
+        total={tasks.data?.total ?? 0}
+        page={state.page}
+        pageSize={state.pageSize}
+        sort={state.sort}
+        onPageChange={(page) => setState({ page })}
+        onPageSizeChange={(pageSize) => setState({ pageSize })}
+        onSortChange={(sort) => setState({ sort })}
+        loading={tasks.isFetching}
+        error={tasks.error}
+        onRetry={() => tasks.refetch()}
+        rowId={(t) => t.id}
         onRowClick={(t) => setState({ task: t.id, page: state.page })}
-        emptyState={<EmptyState title="No tasks here" hint={mine ? 'Nothing is assigned to you with these filters.' : 'Create tasks from a page or from the findings lists.'} />} />
+        emptyState={
+          <EmptyState
+            title="No tasks here"
+            hint={mine ? 'Nothing is assigned to you with these filters.' : 'Create tasks from a page or from the findings lists.'}
+          />
+        }
+      />
       <TaskDetailDrawer taskId={state.task || null} onClose={() => setState({ task: '', page: state.page })} />
     </>
   );

@@ -26,14 +26,17 @@ export function CreateUserDialog({ open, onClose }: Props) {
     if (!form.name.trim()) return setProblem('Enter the person’s name.');
     if (form.password.length < 8) return setProblem('The initial password needs at least 8 characters.');
     setProblem(null);
-    create.mutate({ ...form, email: form.email.trim(), name: form.name.trim() }, {
-      onSuccess: () => {
-        notify(`${form.name.trim()} can now sign in`);
-        setForm(empty);
-        onClose();
+    create.mutate(
+      { ...form, email: form.email.trim(), name: form.name.trim() },
+      {
+        onSuccess: () => {
+          notify(`${form.name.trim()} can now sign in`);
+          setForm(empty);
+          onClose();
+        },
+        onError: (error) => setProblem(errorMessage(error)),
       },
-      onError: (error) => setProblem(errorMessage(error)),
-    });
+    );
   };
 
   return (
@@ -45,16 +48,34 @@ export function CreateUserDialog({ open, onClose }: Props) {
             {problem && <Alert severity="error">{problem}</Alert>}
             <TextField label="E-mail" type="email" value={form.email} onChange={(e) => set({ email: e.target.value })} autoFocus />
             <TextField label="Name" value={form.name} onChange={(e) => set({ name: e.target.value })} />
-            <TextField select label="Role" value={form.role} onChange={(e) => set({ role: e.target.value as Role })} helperText={roleHelp[form.role]}>
-              {ROLES.map((role) => <MenuItem key={role} value={role}>{role}</MenuItem>)}
+            <TextField
+              select
+              label="Role"
+              value={form.role}
+              onChange={(e) => set({ role: e.target.value as Role })}
+              helperText={roleHelp[form.role]}
+            >
+              {ROLES.map((role) => (
+                <MenuItem key={role} value={role}>
+                  {role}
+                </MenuItem>
+              ))}
             </TextField>
-            <TextField label="Initial password" type="password" autoComplete="new-password" value={form.password}
-              onChange={(e) => set({ password: e.target.value })} helperText="Share it privately; they can change it under “Change password”." />
+            <TextField
+              label="Initial password"
+              type="password"
+              autoComplete="new-password"
+              value={form.password}
+              onChange={(e) => set({ password: e.target.value })}
+              helperText="Share it privately; they can change it under “Change password”."
+            />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" disabled={create.isPending}>Create user</Button>
+          <Button type="submit" variant="contained" disabled={create.isPending}>
+            Create user
+          </Button>
         </DialogActions>
       </form>
     </Dialog>

@@ -29,7 +29,7 @@ describe('users admin', () => {
     const fake = api();
     vi.stubGlobal('fetch', fake.fn);
     renderWithProviders(<UsersRoute />, { route: '/admin/users' });
-    expect((await screen.findByRole('switch', { name: 'Ada can sign in' }) as HTMLInputElement).disabled).toBe(true);
+    expect(((await screen.findByRole('switch', { name: 'Ada can sign in' })) as HTMLInputElement).disabled).toBe(true);
     await userEvent.click(screen.getByRole('switch', { name: 'Bo can sign in' }));
     await vi.waitFor(() => expect(fake.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ disabled: true }));
   });
@@ -47,7 +47,13 @@ describe('users admin', () => {
     expect(screen.getByText(/at least 8 characters/)).toBeTruthy();
     fill('Initial password', 'short-enough-now');
     await userEvent.click(screen.getByRole('button', { name: 'Create user' }));
-    await vi.waitFor(() => expect(fake.calls.find((c) => c.method === 'POST')?.body)
-      .toEqual({ email: 'cy@example.test', name: 'Cy', role: 'writer', password: 'short-enough-now' }));
+    await vi.waitFor(() =>
+      expect(fake.calls.find((c) => c.method === 'POST')?.body).toEqual({
+        email: 'cy@example.test',
+        name: 'Cy',
+        role: 'writer',
+        password: 'short-enough-now',
+      }),
+    );
   });
 });

@@ -25,47 +25,93 @@ export default function UsersRoute() {
   const [creating, setCreating] = useState(false);
 
   const patch = (user: User, change: { role?: Role; disabled?: boolean }, done: string) =>
-    update.mutate({ id: user.id, ...change }, {
-      onSuccess: () => notify(done),
-      onError: (error) => notify(errorMessage(error), 'error'),
-    });
+    update.mutate(
+      { id: user.id, ...change },
+      {
+        onSuccess: () => notify(done),
+        onError: (error) => notify(errorMessage(error), 'error'),
+      },
+    );
 
   const columns: ColumnDef<User, unknown>[] = [
     { accessorKey: 'name', header: 'Name', enableSorting: false },
     { accessorKey: 'email', header: 'E-mail', enableSorting: false },
     {
-      accessorKey: 'role', header: 'Role', enableSorting: false,
+      accessorKey: 'role',
+      header: 'Role',
+      enableSorting: false,
       cell: ({ row }) => (
-        <Select size="small" value={row.original.role} disabled={row.original.id === me} inputProps={{ 'aria-label': `Role of ${row.original.name}` }}
-          onChange={(e) => patch(row.original, { role: e.target.value as Role }, `${row.original.name} is now ${e.target.value}`)}>
-          {ROLES.map((role) => <MenuItem key={role} value={role}>{role}</MenuItem>)}
+        <Select
+          size="small"
+          value={row.original.role}
+          disabled={row.original.id === me}
+          inputProps={{ 'aria-label': `Role of ${row.original.name}` }}
+          onChange={(e) => patch(row.original, { role: e.target.value as Role }, `${row.original.name} is now ${e.target.value}`)}
+        >
+          {ROLES.map((role) => (
+            <MenuItem key={role} value={role}>
+              {role}
+            </MenuItem>
+          ))}
         </Select>
       ),
     },
     {
-      id: 'active', header: 'Can sign in', enableSorting: false,
+      id: 'active',
+      header: 'Can sign in',
+      enableSorting: false,
       cell: ({ row }) => (
         <Tooltip title={row.original.id === me ? 'You cannot disable yourself' : ''}>
           <span>
-            <Switch checked={!row.original.disabled} disabled={row.original.id === me}
+            <Switch
+              checked={!row.original.disabled}
+              disabled={row.original.id === me}
               slotProps={{ input: { 'aria-label': `${row.original.name} can sign in` } }}
-              onChange={(e) => patch(row.original, { disabled: !e.target.checked }, `${row.original.name} ${e.target.checked ? 'enabled' : 'disabled'}`)} />
+              onChange={(e) =>
+                patch(row.original, { disabled: !e.target.checked }, `${row.original.name} ${e.target.checked ? 'enabled' : 'disabled'}`)
+              }
+            />
           </span>
         </Tooltip>
       ),
     },
     { id: 'lastSignInAt', header: 'Last sign-in', enableSorting: false, cell: ({ row }) => when(row.original.lastSignInAt) },
-    { id: 'you', header: '', enableSorting: false, enableHiding: false, cell: ({ row }) => (row.original.id === me ? <Chip size="small" label="you" /> : null) },
+    {
+      id: 'you',
+      header: '',
+      enableSorting: false,
+      enableHiding: false,
+      cell: ({ row }) => (row.original.id === me ? <Chip size="small" label="you" /> : null),
+    },
   ];
 
   return (
     <>
-      <PageHeader title="Users" subtitle="Who can sign in, and what each role may do."
-        actions={<Button variant="contained" startIcon={<PersonAddOutlined />} onClick={() => setCreating(true)}>New user</Button>} />
-      <DataTable label="Users" columns={columns} data={users.data?.items} total={users.data?.total ?? 0}
-        page={table.page} pageSize={table.pageSize} sort={table.sort}
-        onPageChange={table.onPageChange} onPageSizeChange={table.onPageSizeChange} onSortChange={table.onSortChange}
-        loading={users.isLoading} error={users.error} onRetry={() => users.refetch()} rowId={(u) => u.id} />
+      <PageHeader
+        title="Users"
+        subtitle="Who can sign in, and what each role may do."
+        actions={
+          <Button variant="contained" startIcon={<PersonAddOutlined />} onClick={() => setCreating(true)}>
+            New user
+          </Button>
+        }
+      />
+      <DataTable
+        label="Users"
+        columns={columns}
+        data={users.data?.items}
+        total={users.data?.total ?? 0}
+        page={table.page}
+        pageSize={table.pageSize}
+        sort={table.sort}
+        onPageChange={table.onPageChange}
+        onPageSizeChange={table.onPageSizeChange}
+        onSortChange={table.onSortChange}
+        loading={users.isLoading}
+        error={users.error}
+        onRetry={() => users.refetch()}
+        rowId={(u) => u.id}
+      />
       <CreateUserDialog open={creating} onClose={() => setCreating(false)} />
     </>
   );

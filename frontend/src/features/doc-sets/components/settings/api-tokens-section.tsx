@@ -23,7 +23,10 @@ export function ApiTokensSection({ docSetId }: { docSetId: string }) {
   const submit = () => {
     if (!name.trim()) return notify('Name the token after where it is used, e.g. “CI pipeline”.', 'warning');
     create.mutate(name.trim(), {
-      onSuccess: ({ token }) => { setSecret(token); setName(''); },
+      onSuccess: ({ token }) => {
+        setSecret(token);
+        setName('');
+      },
       onError: (error) => notify(errorMessage(error), 'error'),
     });
   };
@@ -33,31 +36,62 @@ export function ApiTokensSection({ docSetId }: { docSetId: string }) {
       {secret && (
         <Alert severity="warning" onClose={() => setSecret(null)}>
           Copy this token now; it will not be shown again.
-          <Typography component="code" sx={{ display: 'block', mt: 1, wordBreak: 'break-all', fontFamily: 'monospace' }}>{secret}</Typography>
+          <Typography component="code" sx={{ display: 'block', mt: 1, wordBreak: 'break-all', fontFamily: 'monospace' }}>
+            {secret}
+          </Typography>
         </Alert>
       )}
       <Stack direction="row" spacing={1}>
         <TextField size="small" label="Token name" value={name} onChange={(e) => setName(e.target.value)} />
-        <Button variant="outlined" onClick={submit} disabled={create.isPending}>Create token</Button>
+        <Button variant="outlined" onClick={submit} disabled={create.isPending}>
+          Create token
+        </Button>
       </Stack>
       {tokens.isError && <Alert severity="error">{errorMessage(tokens.error)}</Alert>}
-      {tokens.data?.length === 0 && <Typography variant="body2" color="text.secondary">No tokens yet.</Typography>}
+      {tokens.data?.length === 0 && (
+        <Typography variant="body2" color="text.secondary">
+          No tokens yet.
+        </Typography>
+      )}
       <List dense>
         {tokens.data?.map((t) => (
-          <ListItem key={t.id} disableGutters secondaryAction={
-            <Tooltip title="Revoke"><IconButton aria-label={`Revoke ${t.name}`} onClick={() => setRevoking(t)}><DeleteOutline /></IconButton></Tooltip>
-          }>
-            <ListItemText primary={t.name}
-              secondary={`created ${new Date(t.createdAt).toLocaleDateString()}${t.lastUsedAt ? `, last used ${new Date(t.lastUsedAt).toLocaleString()}` : ', never used'}`} />
+          <ListItem
+            key={t.id}
+            disableGutters
+            secondaryAction={
+              <Tooltip title="Revoke">
+                <IconButton aria-label={`Revoke ${t.name}`} onClick={() => setRevoking(t)}>
+                  <DeleteOutline />
+                </IconButton>
+              </Tooltip>
+            }
+          >
+            <ListItemText
+              primary={t.name}
+              secondary={`created ${new Date(t.createdAt).toLocaleDateString()}${t.lastUsedAt ? `, last used ${new Date(t.lastUsedAt).toLocaleString()}` : ', never used'}`}
+            />
           </ListItem>
         ))}
       </List>
-      <ConfirmDialog open={revoking !== null} title="Revoke token?" destructive confirmLabel="Revoke" busy={remove.isPending}
-        body={`Scripts using “${revoking?.name}” will stop working at once.`} onClose={() => setRevoking(null)}
-        onConfirm={() => revoking && remove.mutate(revoking.id, {
-          onSuccess: () => { notify('Token revoked'); setRevoking(null); },
-          onError: (error) => notify(errorMessage(error), 'error'),
-        })} />
+      <ConfirmDialog
+        open={revoking !== null}
+        title="Revoke token?"
+        destructive
+        confirmLabel="Revoke"
+        busy={remove.isPending}
+        body={`Scripts using “${revoking?.name}” will stop working at once.`}
+        onClose={() => setRevoking(null)}
+        onConfirm={() =>
+          revoking &&
+          remove.mutate(revoking.id, {
+            onSuccess: () => {
+              notify('Token revoked');
+              setRevoking(null);
+            },
+            onError: (error) => notify(errorMessage(error), 'error'),
+          })
+        }
+      />
     </Section>
   );
 }

@@ -15,8 +15,12 @@ type BoolKey = { [K in keyof SettingsForm]: SettingsForm[K] extends boolean ? K 
 export function Section({ title, intro, children }: { title: string; intro: ReactNode; children: ReactNode }) {
   return (
     <Paper variant="outlined" component="section" sx={{ p: 3 }} aria-label={title}>
-      <Typography variant="h3" component="h2">{title}</Typography>
-      <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>{intro}</Typography>
+      <Typography variant="h3" component="h2">
+        {title}
+      </Typography>
+      <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>
+        {intro}
+      </Typography>
       <Stack spacing={2.5}>{children}</Stack>
     </Paper>
   );
@@ -33,9 +37,18 @@ interface TextRowProps extends FieldProps {
 
 export function TextRow({ form, errors, set, readOnly, name, label, help, multiline, type = 'text', step }: TextRowProps) {
   return (
-    <TextField label={label} value={form[name]} onChange={(e) => set({ [name]: e.target.value } as Partial<SettingsForm>)}
-      error={Boolean(errors[name])} helperText={errors[name] ?? help} multiline={multiline} minRows={multiline ? 2 : undefined}
-      type={type} slotProps={{ htmlInput: { step, readOnly } }} fullWidth />
+    <TextField
+      label={label}
+      value={form[name]}
+      onChange={(e) => set({ [name]: e.target.value } as Partial<SettingsForm>)}
+      error={Boolean(errors[name])}
+      helperText={errors[name] ?? help}
+      multiline={multiline}
+      minRows={multiline ? 2 : undefined}
+      type={type}
+      slotProps={{ htmlInput: { step, readOnly } }}
+      fullWidth
+    />
   );
 }
 
@@ -48,9 +61,14 @@ interface SwitchRowProps extends FieldProps {
 export function SwitchRow({ form, set, readOnly, name, label, help }: SwitchRowProps) {
   return (
     <div>
-      <FormControlLabel label={label} disabled={readOnly}
-        control={<Switch checked={form[name]} onChange={(e) => set({ [name]: e.target.checked } as Partial<SettingsForm>)} />} />
-      <Typography variant="caption" color="text.secondary" component="p" sx={{ ml: 6, mt: -0.5 }}>{help}</Typography>
+      <FormControlLabel
+        label={label}
+        disabled={readOnly}
+        control={<Switch checked={form[name]} onChange={(e) => set({ [name]: e.target.checked } as Partial<SettingsForm>)} />}
+      />
+      <Typography variant="caption" color="text.secondary" component="p" sx={{ ml: 6, mt: -0.5 }}>
+        {help}
+      </Typography>
     </div>
   );
 }

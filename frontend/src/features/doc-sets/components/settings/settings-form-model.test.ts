@@ -18,7 +18,11 @@ describe('settings form model', () => {
   });
 
   it('reads one entry per line, redirects as "from -> to", and names the failing field', () => {
-    const form = { ...toForm(defaultDocSetSettings()), entryPages: 'index.md\n\n guide/start.md ', redirects: 'old.md -> new.md\nbroken-line' };
+    const form = {
+      ...toForm(defaultDocSetSettings()),
+      entryPages: 'index.md\n\n guide/start.md ',
+      redirects: 'old.md -> new.md\nbroken-line',
+    };
     const out = fromForm(form);
     expect(out.settings).toBeNull();
     expect(out.errors.redirects).toMatch(/Line 2/);

@@ -30,7 +30,11 @@ export interface SettingsForm {
 
 export type FieldErrors = Partial<Record<keyof SettingsForm, string>>;
 
-const lines = (text: string) => text.split(/\r?\n/).map((l) => l.trim()).filter(Boolean);
+const lines = (text: string) =>
+  text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter(Boolean);
 /** Number("") is 0, which would silently pass as a value; keep empty as NaN so the schema rejects it. */
 const num = (text: string) => (text.trim() === '' ? Number.NaN : Number(text));
 
