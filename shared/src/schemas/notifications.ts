@@ -1,5 +1,5 @@
 // Who gets which e-mail, in which time zone, and the one-click unsubscribe: contracts of /api/me/notifications
-// and /api/unsubscribe (docs/api.md "Mail and notifications").
+// and /api/unsubscribe (docs/mail-and-work.md).
 import { z } from 'zod';
 
 /** Every kind of mail Linkloom sends to a person; each can be switched off on its own. */

@@ -1,4 +1,4 @@
-// The nightly job as GET /api/schedule reports it (docs/api.md "Mail, subscriptions, tokens, health").
+// The nightly job as GET /api/schedule reports it (docs/mail-and-work.md).
 import { z } from 'zod';
 
 /** One doc set's part in a nightly job, with how many people its digest went to. */

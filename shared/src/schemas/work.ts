@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** Fix tasks and the pruning list as the HTTP contract carries them (docs/api.md "Work"). */
+/** Fix tasks and the pruning list as the HTTP contract carries them (docs/mail-and-work.md). */
 export const TASK_KINDS = [
   'add-inbound-links',
   'repair-broken-links',

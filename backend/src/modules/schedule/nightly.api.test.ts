@@ -48,7 +48,7 @@ describe('the nightly job and its digest of what changed since each reader last 
 
   beforeAll(async () => {
     t = await createTestApp({ mailPollMs: 600_000 });
-    // A doc-set name trying to add a header to the digest's subject (docs/threats.md, header injection).
+    // A doc-set name trying to add a header to the digest's subject (docs/mail-and-work.md, "Threats considered").
     docSetId = await createDocSet(t, 'Workshop\r\nBcc: intruder@evil.test', { entryPages: ['index.md'] });
     await snapshotOf(t, docSetId, HANDBOOK_PAGES, HANDBOOK_LINKS);
     await waitForRun(t, docSetId, await startRun(t, docSetId));

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { PageFinding } from './run-findings.repository.js';
 import { checkItems, checkOutcome, findingPresent, verificationStep } from './task-verification.js';
 
-// Hand-drawn cases: which finding each kind of task is about follows the definitions in docs/metrics.md
+// Hand-drawn cases: which finding each kind of task is about follows docs/mail-and-work.md ("Fix tasks")
 // (orphan = no inbound links, dead end = no outbound links, unreachable from the entry pages).
 const page = (over: Partial<PageFinding> = {}): PageFinding => ({
   path: 'guide/a.md',

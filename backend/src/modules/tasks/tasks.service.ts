@@ -32,7 +32,7 @@ export class TasksService {
     private readonly database: DbService,
   ) {}
 
-  /** Writers see only their own tasks (docs/threats.md); everyone else may filter freely. */
+  /** Writers see only their own tasks (docs/mail-and-work.md, "What a viewer sees"); everyone else may filter freely. */
   async list(actor: AuthUser, query: ListTasksQuery): Promise<ListResult<TaskItem>> {
     const assigneeId = actor.role === 'writer' || query.assignee === 'me' ? actor.id : query.assignee;
     const filter = {
