@@ -72,7 +72,7 @@ function workBlocks(content: DigestContent, zone: string): Block[] {
       text: [`${label}: ${lines.length}`, ...lines.map((l) => `  ${l}`)],
       html: [heading(`${label}: ${lines.length}`), bulletList(lines)],
     }));
-  const waiting = `Pruning decisions waiting: ${content.pruning.waiting}`;
+  const waiting = `Pages waiting for a pruning decision: ${content.pruning.waiting}`;
   return content.pruning.waiting > 0 ? [...blocks, { text: [waiting], html: [paragraph(waiting)] }] : blocks;
 }
 

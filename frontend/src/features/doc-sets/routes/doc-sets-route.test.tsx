@@ -47,7 +47,8 @@ describe('home screen', () => {
     expect(titles.map((t) => t.textContent)).toEqual(['Repair the crane links', 'Link the tide tables']);
     expect(within(panel).getByText('Reopened by run 5')).toBeTruthy();
     const heading = await screen.findByRole('heading', { name: 'Doc sets' });
-    expect(panel.compareDocumentPosition(heading) & Node.DOCUMENT_POSITION_PRECEDING).toBeTruthy();
+    // The doc sets come after the tasks: the heading follows the panel in the page.
+    expect(panel.compareDocumentPosition(heading) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
     const query = fake.calls.find((c) => c.url.pathname === '/api/tasks')!.url.searchParams;
     expect([query.get('assignee'), query.get('status')]).toEqual(['me', 'open,in-progress']);
   });

@@ -23,13 +23,13 @@ export default function DocSetsRoute() {
   );
   return (
     <>
+      {/* People who fix pages see their open work first; editors only when they have some. */}
+      {doesFixes && <MyOpenTasks hideWhenEmpty={canCreate} />}
       <PageHeader
         title="Doc sets"
         subtitle="Each doc set is one body of Markdown documentation, analysed after every upload."
         actions={newButton}
       />
-      {/* People who fix pages see their open work first; editors only when they have some. */}
-      {doesFixes && <MyOpenTasks hideWhenEmpty={canCreate} />}
       {docSets.isLoading && <LoadingSkeleton variant="cards" count={3} />}
       {docSets.isError && <ErrorPanel error={docSets.error} onRetry={() => docSets.refetch()} />}
       {docSets.data?.length === 0 && (

@@ -27,6 +27,8 @@ export function useNotificationChoices() {
     settings,
     shown,
     saving: update.isPending,
+    /** Whether anything was sent yet, so "saved" is said only after a change. */
+    changed: !update.isIdle,
     saveError: update.error,
     setKind: (kind: MailKind, on: boolean) => update.mutate({ kinds: { [kind]: on } }),
     setDocSet: (docSetId: string, change: DocSetChoice) => update.mutate({ docSets: [{ docSetId, ...change }] }),

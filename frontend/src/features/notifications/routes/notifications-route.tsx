@@ -27,7 +27,7 @@ function Section({ title, hint, children }: { title: string; hint: string; child
 
 /** Account menu, Notifications: which e-mails this person gets, per kind and per doc set, and in which time zone. */
 export default function NotificationsRoute() {
-  const { settings, shown, saving, saveError, setKind, setDocSet, setTimeZone } = useNotificationChoices();
+  const { settings, shown, saving, changed, saveError, setKind, setDocSet, setTimeZone } = useNotificationChoices();
   const decides = useRoleAtLeast('editor');
   const assignable = useRoleAtLeast('writer');
   const offered: MailKind[] = [
@@ -45,7 +45,7 @@ export default function NotificationsRoute() {
       {settings.error && <ErrorPanel error={settings.error} onRetry={() => settings.refetch()} title="Your choices could not be loaded" />}
       {shown && (
         <Stack spacing={3}>
-          <SaveState pending={saving} error={saveError} />
+          {changed && <SaveState pending={saving} error={saveError} />}
           <Section title="Kinds of e-mail" hint="Switching a kind off stops every e-mail of that kind.">
             <MailKindSwitches kinds={shown.kinds} offered={offered} onChange={setKind} />
           </Section>

@@ -55,13 +55,7 @@ export default function ScheduleRoute() {
       <ConfirmDialog
         open={confirming}
         title="Run the nightly job now?"
-        body={
-          <>
-            Every doc set with nightly runs on is re-read or re-analysed
-            {data ? ` (${data.docSets.filter((d) => d.nightly).length} now)` : ''}, and the digests go out to their readers, exactly as at{' '}
-            {data?.nightlyTime ?? 'night'}. Readers then get the next digest only for what changes after this run.
-          </>
-        }
+        body={`Every doc set with nightly runs on${data ? ` (${data.docSets.filter((d) => d.nightly).length} now)` : ''} is re-read or re-analysed, and the digests go out to their readers as at ${data?.nightlyTime ?? 'night'}. Each reader's next digest then covers only what changes after this run.`}
         confirmLabel="Run now"
         onConfirm={start}
         onClose={() => setConfirming(false)}

@@ -19,16 +19,19 @@ export function findingItems(task: Pick<Task, 'pagePath' | 'finding' | 'check'>)
 }
 
 /** One row per link or page of the task, saying which are still found. */
-export function TaskFindingsList({ task }: { task: Pick<Task, 'pagePath' | 'finding' | 'check'> }) {
+export function TaskFindingsList({ task }: { task: Pick<Task, 'kind' | 'pagePath' | 'finding' | 'check'> }) {
   const items = findingItems(task);
   const run = task.check?.runNumber ? `run ${task.check.runNumber}` : 'the latest run';
+  // Runs judge links and page findings; a review or free-form task is judged by people.
+  const judged = task.kind !== 'other' && task.kind !== 'review-pruning';
+  const state = task.check ? `As ${run} sees them.` : judged ? 'Not checked by a run yet.' : 'Runs do not check tasks of this kind.';
   return (
     <section aria-label="Findings of this task">
       <Typography variant="h3" sx={{ mb: 0.5 }}>
         {items.length === 1 ? 'Finding' : `Findings (${items.length})`}
       </Typography>
       <Typography variant="body2" color="text.secondary">
-        {task.check ? `As ${run} sees them.` : 'Not checked by a run yet.'}
+        {state}
       </Typography>
       <List dense>
         {items.map((i) => (
