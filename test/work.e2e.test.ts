@@ -4,8 +4,8 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import yazl from 'yazl';
 import { launchBrowser, screenshot, signIn } from './support/browser.js';
+import { waitFor, zipOf as zip } from './support/http.js';
 import { type RunningServer, startServer } from './support/server.js';
 
 const EDITOR = 'editor@demo.linkloom.test';
@@ -28,29 +28,6 @@ function handbook(cranesFixed: boolean): Record<string, string> {
     'guide/old-ferry.md': `---\nowner: ${WRITER}\n---\n# Old ferry times\n\nThe winter ferry left at six. [Start](../index.md)\n`,
     'guide/pilot-notes.md': `# Pilot notes\n\nDraft, never finished. [Start](../index.md)\n`,
   };
-}
-
-/** Polls outside a test body too (expect.poll works only inside one). */
-async function waitFor(check: () => Promise<boolean>, timeoutMs: number, what: string): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (await check()) return;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`Timed out waiting for ${what}`);
-}
-
-function zip(files: Record<string, string>): Promise<Buffer> {
-  const archive = new yazl.ZipFile();
-  for (const [name, text] of Object.entries(files)) archive.addBuffer(Buffer.from(text), name);
-  archive.end();
-  const chunks: Buffer[] = [];
-  return new Promise((resolve, reject) => {
-    archive.outputStream
-      .on('data', (c: Buffer) => chunks.push(c))
-      .on('end', () => resolve(Buffer.concat(chunks)))
-      .on('error', reject);
-  });
 }
 
 describe('work on findings: tasks and the pruning list', () => {
@@ -154,9 +131,11 @@ describe('work on findings: tasks and the pruning list', () => {
 
     await importArchive(true);
     await expect.poll(async () => (await api(`/tasks/${cranes.id}`)).body.verification, { timeout: 30_000 }).toBe('verified');
-    await writer.goto(`${server.url}/tasks?status=done&task=${cranes.id}`);
-    await writer.getByText('The latest run no longer shows this finding: verified.').waitFor({ timeout: 15_000 });
-    expect(await writer.getByText('Verified', { exact: true }).first().isVisible()).toBe(true);
+    // "Fixed and verified by run N" is a state of its own, apart from the writer's "done".
+    expect((await api(`/tasks/${cranes.id}`)).body.status).toBe('verified');
+    await writer.goto(`${server.url}/tasks?status=verified&task=${cranes.id}`);
+    await writer.getByText(/no longer finds this: fixed and verified\./).waitFor({ timeout: 15_000 });
+    expect(await writer.getByText(/^Fixed and verified by run \d+$/).first().isVisible()).toBe(true);
     await screenshot(writer, 'work-task-verified');
     // The old-ferry task's orphan finding is still there, so it stays open.
     const ferry = tasks.find((t) => t.pagePath === 'guide/old-ferry.md')!;

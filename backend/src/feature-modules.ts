@@ -9,6 +9,7 @@ import { TasksModule } from './modules/tasks/tasks.module.js';
 import { PruningModule } from './modules/pruning/pruning.module.js';
 import { LinkMapModule } from './modules/link-map/link-map.module.js';
 import { NightlyScheduleModule } from './modules/schedule/schedule.module.js';
+import { DigestModule } from './modules/digest/digest.module.js';
 
 /** The product's capability modules (doc sets, imports, runs, work, mail...), listed once. */
 export const FEATURE_MODULES: Type[] = [
@@ -19,6 +20,7 @@ export const FEATURE_MODULES: Type[] = [
   RunsModule,
   TasksModule,
   PruningModule,
+  DigestModule,
   NightlyScheduleModule,
   LinkMapModule,
   ApiTokensModule,

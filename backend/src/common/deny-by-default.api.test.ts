@@ -2,12 +2,13 @@ import 'reflect-metadata';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../testing/test-app.js';
 
-const PUBLIC = new Set(['POST /api/auth/sign-in', 'GET /api/health']);
+// The unsubscribe links of e-mails work without signing in (RFC 8058 section 3); their signed token is the credential.
+const PUBLIC = new Set(['POST /api/auth/sign-in', 'GET /api/health', 'GET /api/unsubscribe/{token}', 'POST /api/unsubscribe/{token}']);
 const DUMMY_ID = '00000000-0000-4000-8000-000000000000';
 
 /**
  * RELIABILITY check 56, first half: the route list comes from the app's own OpenAPI document, so a route
- * added later is covered without editing this test. Every route but sign-in and health must refuse an
+ * added later is covered without editing this test. Every route but sign-in, health and unsubscribe must refuse an
  * anonymous caller and a viewer must be refused every write that needs a higher role.
  */
 describe('deny by default', () => {

@@ -28,6 +28,8 @@ function screen(path: string | undefined, load: () => Promise<ScreenModule>, min
 
 export const routes: RouteObject[] = [
   screen('/sign-in', () => import('../features/auth/routes/sign-in-route.js')),
+  // Opened from an e-mail, signed in or not: the signed token in the link is all it needs.
+  screen('/unsubscribe/:token', () => import('../features/notifications/routes/unsubscribe-route.js')),
   {
     path: '/',
     element: (
@@ -52,6 +54,7 @@ export const routes: RouteObject[] = [
       screen('admin/mail', () => import('../features/mail/routes/mail-route.js'), 'admin'),
       screen('admin/schedule', () => import('../features/schedule/routes/schedule-route.js'), 'editor'),
       screen('account', () => import('../features/auth/routes/account-route.js')),
+      screen('account/notifications', () => import('../features/notifications/routes/notifications-route.js')),
       screen('*', () => import('./not-found-route.js')),
     ],
   },

@@ -21,6 +21,8 @@ export interface NavItem {
   /** Doc-set sections receive the open doc set's id. */
   to: (docSetId: string) => string;
   minRole: Role;
+  /** The most a role may hold to see the entry (an entry only for readers, say); none when absent. */
+  maxRole?: Role;
   /** `true` when only the exact path counts as "here" (Overview vs its sub-pages). */
   end?: boolean;
 }
@@ -42,7 +44,9 @@ export const docSetNav: NavItem[] = [
 /** Always-present entries. */
 export const globalNav: NavItem[] = [
   { id: 'doc-sets', label: 'Doc sets', icon: LibraryBooksOutlined, to: () => '/', minRole: 'viewer', end: true },
-  { id: 'tasks', label: 'My tasks', icon: AssignmentOutlined, to: () => '/tasks', minRole: 'viewer' },
+  // Viewers are never assigned work: they read all tasks (docs/mail-and-work.md, "What a viewer sees").
+  { id: 'tasks', label: 'My tasks', icon: AssignmentOutlined, to: () => '/tasks', minRole: 'writer' },
+  { id: 'all-tasks', label: 'Tasks', icon: AssignmentOutlined, to: () => '/tasks', minRole: 'viewer', maxRole: 'viewer' },
 ];
 
 /** Administration entries. */

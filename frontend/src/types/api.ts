@@ -24,6 +24,8 @@ export type RunTrigger = 'import' | 'manual' | 'nightly';
 
 export interface Run {
   id: string;
+  /** 1, 2, 3... per doc set (shared `runViewSchema`); absent in older fixtures. */
+  number?: number | null;
   snapshotId: string;
   status: RunStatus | string;
   trigger: RunTrigger;

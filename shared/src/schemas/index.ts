@@ -5,3 +5,6 @@ export * from './users.js';
 export * from './doc-sets.js';
 export * from './runs.js';
 export * from './work.js';
+export * from './tasks.js';
+export * from './notifications.js';
+export * from './schedule.js';

@@ -5,5 +5,6 @@ export * from './doc-sets.js';
 export * from './snapshots.js';
 export * from './runs.js';
 export * from './mail.js';
+export * from './notifications.js';
 export * from './work.js';
 export * from './api-tokens.js';

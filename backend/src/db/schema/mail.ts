@@ -1,6 +1,4 @@
-import { boolean, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { docSets } from './doc-sets.js';
-import { users } from './users.js';
+import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 
 /**
  * Every e-mail is first written here, in the same transaction as the event that causes it; a sender
@@ -17,6 +15,8 @@ export const outbox = pgTable(
     subject: text('subject').notNull(),
     text: text('text').notNull(),
     html: text('html').notNull(),
+    /** Extra header lines (List-Unsubscribe and List-Unsubscribe-Post, RFC 2369 and RFC 8058). */
+    headers: jsonb('headers').$type<Record<string, string>>().notNull().default({}),
     status: text('status', { enum: ['pending', 'sending', 'sent', 'failed'] })
       .notNull()
       .default('pending'),
@@ -41,26 +41,12 @@ export const mailboxMessages = pgTable(
     subject: text('subject').notNull().default(''),
     text: text('text').notNull().default(''),
     html: text('html').notNull().default(''),
+    /** The list headers as received (lower-case names), so people and tests can see what a mail client sees. */
+    headers: jsonb('headers').$type<Record<string, string>>().notNull().default({}),
     bytes: integer('bytes').notNull().default(0),
     receivedAt: timestamp('received_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('mailbox_received_idx').on(t.receivedAt)],
-);
-
-/** Per user and doc set: whether to get the nightly digest, and whether also when nothing changed. */
-export const subscriptions = pgTable(
-  'subscriptions',
-  {
-    userId: uuid('user_id')
-      .notNull()
-      .references(() => users.id, { onDelete: 'cascade' }),
-    docSetId: uuid('doc_set_id')
-      .notNull()
-      .references(() => docSets.id, { onDelete: 'cascade' }),
-    digest: boolean('digest').notNull().default(true),
-    nothingChanged: boolean('nothing_changed').notNull().default(false),
-  },
-  (t) => [primaryKey({ columns: [t.userId, t.docSetId] })],
 );
 
 /** A lease per scheduled job, so two processes on one database run a job once. */

@@ -14,6 +14,8 @@ export const runs = pgTable(
     docSetId: uuid('doc_set_id')
       .notNull()
       .references(() => docSets.id, { onDelete: 'cascade' }),
+    /** 1, 2, 3... per doc set in the order runs were queued, so people can name a run ("verified by run 7"). */
+    number: integer('number'),
     snapshotId: uuid('snapshot_id')
       .notNull()
       .references(() => snapshots.id, { onDelete: 'cascade' }),

@@ -1,4 +1,4 @@
-import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type PruningReason, type TaskFinding } from '@linkloom/shared';
+import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, type PruningReason, type TaskCheck, type TaskFinding } from '@linkloom/shared';
 import {
   boolean,
   doublePrecision,
@@ -16,11 +16,12 @@ import { docSets } from './doc-sets.js';
 import { users } from './users.js';
 
 // The contract types live in shared/ (front and back end use them); re-exported for the schema's readers.
-export { TASK_KINDS, TASK_STATUSES, type PruningReason, type TaskFinding };
+export { TASK_KINDS, TASK_STATUSES, type PruningReason, type TaskCheck, type TaskFinding };
 
 /**
  * A fix task. Keyed to the page by doc set + path (not by page id), so it follows the page across snapshots.
- * `verification` is set by runs: `verified` when the finding is gone, `flagged` when done but still there.
+ * `verification` is set by runs: `verified` when the finding is gone, `flagged` when done but still there;
+ * `lastCheck` keeps the latest run's verdict finding by finding (which link is still found).
  */
 export const tasks = pgTable(
   'tasks',
@@ -41,6 +42,7 @@ export const tasks = pgTable(
     verification: text('verification', { enum: ['verified', 'flagged'] }),
     verifiedRunId: uuid('verified_run_id'),
     verifiedAt: timestamp('verified_at', { withTimezone: true }),
+    lastCheck: jsonb('last_check').$type<TaskCheck>(),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
@@ -65,9 +67,11 @@ export const taskEvents = pgTable(
     actorName: text('actor_name').notNull(),
     body: text('body').notNull().default(''),
     changes: jsonb('changes').$type<Record<string, { from: unknown; to: unknown }>>().notNull().default({}),
+    /** The run that made this change (verification), so a digest can list what its runs did. */
+    runId: uuid('run_id'),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('task_events_task_idx').on(t.taskId, t.at)],
+  (t) => [index('task_events_task_idx').on(t.taskId, t.at), index('task_events_run_idx').on(t.runId)],
 );
 
 /** One row per doc set: the pruning list's optimistic-concurrency version and the run it was built from. */

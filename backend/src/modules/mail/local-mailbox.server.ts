@@ -6,6 +6,20 @@ import type { MailboxRepository } from './mailbox.repository.js';
 
 const MAX_MESSAGE_BYTES = 10 * 1024 * 1024;
 
+/** The List-* header lines (RFC 2369, RFC 8058) as received, lower-case names, values unfolded. */
+function listHeaders(lines: readonly { key: string; line: string }[]): Record<string, string> {
+  const kept = lines.filter((h) => h.key.startsWith('list-'));
+  return Object.fromEntries(
+    kept.map((h) => [
+      h.key,
+      h.line
+        .slice(h.line.indexOf(':') + 1)
+        .replace(/\r?\n[ \t]+/g, ' ')
+        .trim(),
+    ]),
+  );
+}
+
 /** The stand-in for a mail server: an SMTP server on loopback that keeps every message it receives. */
 export class LocalMailboxServer {
   private readonly logger = new Logger('LocalMailbox');
@@ -31,6 +45,7 @@ export class LocalMailboxServer {
               subject: mail.subject ?? '',
               text: mail.text ?? '',
               html: typeof mail.html === 'string' ? mail.html : '',
+              headers: listHeaders(mail.headerLines),
               bytes: 0,
             }),
           )

@@ -7,6 +7,7 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  headers?: Record<string, string>;
 }
 
 export class MailDeliveryError extends Error {
@@ -39,6 +40,7 @@ export class MailTransport {
         subject: mail.subject,
         text: mail.text,
         html: mail.html,
+        headers: mail.headers,
         disableFileAccess: true,
         disableUrlAccess: true,
       });

@@ -5,10 +5,13 @@ import { APP_CONFIG, type AppConfig } from '../../config/app-config.js';
 import { AppError, notFound } from '../../common/app-error.js';
 import type { Executor } from '../../db/database.js';
 import { LocalMailboxServer } from './local-mailbox.server.js';
-import { isPlainAddress, singleLineSubject } from './mail-address.js';
+import { isPlainAddress, singleLineHeaders, singleLineSubject } from './mail-address.js';
 import { MailDeliveryError, MailTransport } from './mail-transport.js';
 import { MailboxRepository } from './mailbox.repository.js';
 import { type NewOutboxMessage, OutboxRepository, type OutboxRow } from './outbox.repository.js';
+
+/** What other modules hand to `enqueue`. */
+export type { NewOutboxMessage };
 
 const MAX_ATTEMPTS = 8;
 const MAX_BACKOFF_MS = 3_600_000;
@@ -69,7 +72,13 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
       .map(({ dedupeKey, ...m }) => {
         const id = randomUUID();
         const key = dedupeKey ? dedupeKey.replace(/[^A-Za-z0-9.-]/g, '-').slice(0, 120) : id;
-        return { ...m, id, messageId: `<${key}@linkloom.local>`, subject: singleLineSubject(m.subject) };
+        return {
+          ...m,
+          id,
+          messageId: `<${key}@linkloom.local>`,
+          subject: singleLineSubject(m.subject),
+          headers: singleLineHeaders(m.headers),
+        };
       });
     await this.outbox.insert(rows, executor);
     return rows.map((r) => r.id);
@@ -99,6 +108,7 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
         subject: row.subject,
         text: row.text,
         html: row.html,
+        headers: row.headers,
       });
       await this.outbox.markSent(row.id);
       return true;
@@ -154,6 +164,7 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
       to: row.toAddresses,
       subject: row.subject,
       receivedAt: row.receivedAt.toISOString(),
+      headers: row.headers,
       text: row.text,
       html: row.html,
     };

@@ -8,6 +8,7 @@ export type OutboxRow = typeof outbox.$inferSelect;
 export type NewOutboxMessage = Pick<OutboxRow, 'kind' | 'toAddress' | 'subject' | 'text' | 'html'> & {
   docSetId?: string | null;
   dedupeKey?: string;
+  headers?: Record<string, string>;
 };
 
 @Injectable()

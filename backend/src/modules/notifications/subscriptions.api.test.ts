@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
-import { SubscriptionsRepository } from './subscriptions.repository.js';
+import { NotificationSettingsService } from './notification-settings.service.js';
 
 describe('digest subscriptions', () => {
   let t: TestApp;
@@ -21,7 +21,7 @@ describe('digest subscriptions', () => {
     expect(editor.body.subscriptions).toEqual([{ docSetId, digest: true, nothingChanged: false }]);
     const writer = await t.http.get('/api/me/subscriptions').set('Authorization', `Bearer ${await t.tokenFor('writer')}`);
     expect(writer.body.subscriptions).toEqual([{ docSetId, digest: false, nothingChanged: false }]);
-    const recipients = await t.app.get(SubscriptionsRepository).digestRecipients(docSetId);
+    const recipients = await t.app.get(NotificationSettingsService).recipients('digest', { docSetId });
     expect(recipients.map((r) => r.email)).toEqual(['admin@demo.linkloom.test', 'editor@demo.linkloom.test']);
   });
 
@@ -37,7 +37,7 @@ describe('digest subscriptions', () => {
       .put('/api/me/subscriptions')
       .set('Authorization', `Bearer ${await t.tokenFor('admin')}`)
       .send({ subscriptions: [{ docSetId, digest: false, nothingChanged: false }] });
-    const recipients = await t.app.get(SubscriptionsRepository).digestRecipients(docSetId);
+    const recipients = await t.app.get(NotificationSettingsService).recipients('digest', { docSetId });
     expect(recipients.map((r) => [r.email, r.nothingChanged])).toEqual([
       ['editor@demo.linkloom.test', false],
       ['writer@demo.linkloom.test', true],

@@ -1,15 +1,9 @@
 import { Body, Controller, Get, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { z } from 'zod';
+import { subscriptionsSchema, type Subscription } from '@linkloom/shared';
 import { type AuthUser, CurrentUser } from '../../common/auth.decorators.js';
 import { ApiZodBody, ZodPipe } from '../../common/zod-pipe.js';
 import { SubscriptionsService } from './subscriptions.service.js';
-
-const putSchema = z
-  .object({
-    subscriptions: z.array(z.object({ docSetId: z.string().uuid(), digest: z.boolean(), nothingChanged: z.boolean() }).strict()).max(1000),
-  })
-  .strict();
 
 @ApiTags('subscriptions')
 @ApiBearerAuth()
@@ -23,8 +17,8 @@ export class SubscriptionsController {
   }
 
   @Put()
-  @ApiZodBody(putSchema)
-  put(@CurrentUser() user: AuthUser, @Body(new ZodPipe(putSchema)) body: z.infer<typeof putSchema>) {
+  @ApiZodBody(subscriptionsSchema)
+  put(@CurrentUser() user: AuthUser, @Body(new ZodPipe(subscriptionsSchema)) body: { subscriptions: Subscription[] }) {
     return this.subscriptions.put(user, body.subscriptions);
   }
 }

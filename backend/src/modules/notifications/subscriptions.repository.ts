@@ -1,53 +1,58 @@
 import { Injectable } from '@nestjs/common';
 import { eq, sql } from 'drizzle-orm';
 import { DbService } from '../../db/db.service.js';
-import { docSets, subscriptions, users } from '../../db/schema/index.js';
+import { docSets, subscriptions } from '../../db/schema/index.js';
 
+/** A stored per-doc-set choice; `pruningWaiting` null means the role's default. */
 export interface SubscriptionChoice {
   docSetId: string;
   digest: boolean;
   nothingChanged: boolean;
+  pruningWaiting: boolean | null;
 }
 
+export type SubscriptionPatch = { docSetId: string } & Partial<Omit<SubscriptionChoice, 'docSetId'>>;
+
+/** Per user and doc set: the digest and pruning-list choices (the `subscriptions` table). */
 @Injectable()
 export class SubscriptionsRepository {
   constructor(private readonly database: DbService) {}
 
   async forUser(userId: string): Promise<SubscriptionChoice[]> {
     return this.database.db
-      .select({ docSetId: subscriptions.docSetId, digest: subscriptions.digest, nothingChanged: subscriptions.nothingChanged })
+      .select({
+        docSetId: subscriptions.docSetId,
+        digest: subscriptions.digest,
+        nothingChanged: subscriptions.nothingChanged,
+        pruningWaiting: subscriptions.pruningWaiting,
+      })
       .from(subscriptions)
       .where(eq(subscriptions.userId, userId));
   }
 
-  async replace(userId: string, choices: SubscriptionChoice[]): Promise<void> {
+  /** Writes each patch over the stored row, or over `defaults(docSetId)` when there is none yet. */
+  async apply(userId: string, patches: SubscriptionPatch[], defaults: (docSetId: string) => Omit<SubscriptionChoice, 'docSetId'>) {
+    const stored = new Map((await this.forUser(userId)).map((s) => [s.docSetId, s]));
     await this.database.db.transaction(async (tx) => {
-      for (const c of choices) {
+      for (const patch of patches) {
+        const next = { ...(stored.get(patch.docSetId) ?? { docSetId: patch.docSetId, ...defaults(patch.docSetId) }), ...patch };
+        // Without the digest, "also when nothing changed" has nothing to qualify.
+        if (!next.digest) next.nothingChanged = false;
         await tx
           .insert(subscriptions)
-          .values({ userId, ...c })
+          .values({ userId, ...next })
           .onConflictDoUpdate({
             target: [subscriptions.userId, subscriptions.docSetId],
-            set: { digest: c.digest, nothingChanged: c.nothingChanged },
+            set: { digest: next.digest, nothingChanged: next.nothingChanged, pruningWaiting: next.pruningWaiting },
           });
       }
     });
   }
 
-  async docSetIds(): Promise<string[]> {
-    return (await this.database.db.select({ id: docSets.id }).from(docSets)).map((r) => r.id);
-  }
-
-  /**
-   * Who gets the digest of a doc set: explicit choices win; without one, editors and admins get it (the
-   * people who triage), writers and viewers do not. Disabled users never do.
-   */
-  async digestRecipients(docSetId: string): Promise<{ userId: string; email: string; name: string; nothingChanged: boolean }[]> {
-    const result = await this.database.db.execute(sql`
-      select u.id as "userId", u.email, u.name, coalesce(s.nothing_changed, false) as "nothingChanged"
-      from ${users} u left join ${subscriptions} s on s.user_id = u.id and s.doc_set_id = ${docSetId}
-      where u.disabled = false and coalesce(s.digest, u.role in ('admin', 'editor'))
-      order by u.email`);
-    return (result as unknown as { rows: { userId: string; email: string; name: string; nothingChanged: boolean }[] }).rows;
+  async docSets(): Promise<{ id: string; name: string }[]> {
+    return this.database.db
+      .select({ id: docSets.id, name: docSets.name })
+      .from(docSets)
+      .orderBy(sql`lower(${docSets.name})`, docSets.id);
   }
 }

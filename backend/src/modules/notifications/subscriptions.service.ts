@@ -1,28 +1,21 @@
 import { Injectable } from '@nestjs/common';
-import { roleAtLeast } from '@linkloom/shared';
-import { AppError } from '../../common/app-error.js';
+import type { Subscription } from '@linkloom/shared';
 import type { AuthUser } from '../../common/auth.decorators.js';
-import { type SubscriptionChoice, SubscriptionsRepository } from './subscriptions.repository.js';
+import { NotificationSettingsService } from './notification-settings.service.js';
 
+/** The older digest-only view of the notification settings (GET|PUT /api/me/subscriptions). */
 @Injectable()
 export class SubscriptionsService {
-  constructor(private readonly repository: SubscriptionsRepository) {}
+  constructor(private readonly settings: NotificationSettingsService) {}
 
   /** One entry per doc set: the stored choice, or the default for the user's role. */
-  async get(user: AuthUser): Promise<{ subscriptions: SubscriptionChoice[] }> {
-    const stored = new Map((await this.repository.forUser(user.id)).map((s) => [s.docSetId, s]));
-    const byDefault = roleAtLeast(user.role, 'editor');
-    const subscriptions = (await this.repository.docSetIds()).map(
-      (docSetId) => stored.get(docSetId) ?? { docSetId, digest: byDefault, nothingChanged: false },
-    );
-    return { subscriptions };
+  async get(user: AuthUser): Promise<{ subscriptions: Subscription[] }> {
+    const { docSets } = await this.settings.get(user);
+    return { subscriptions: docSets.map(({ docSetId, digest, nothingChanged }) => ({ docSetId, digest, nothingChanged })) };
   }
 
-  async put(user: AuthUser, choices: SubscriptionChoice[]): Promise<{ subscriptions: SubscriptionChoice[] }> {
-    const known = new Set(await this.repository.docSetIds());
-    const unknown = choices.filter((c) => !known.has(c.docSetId)).map((c) => c.docSetId);
-    if (unknown.length) throw new AppError(404, 'NOT_FOUND', `No doc set with the id ${unknown[0]}.`, unknown);
-    await this.repository.replace(user.id, choices);
+  async put(user: AuthUser, choices: Subscription[]): Promise<{ subscriptions: Subscription[] }> {
+    await this.settings.update(user, { docSets: choices });
     return this.get(user);
   }
 }

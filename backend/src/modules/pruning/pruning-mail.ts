@@ -1,35 +1,28 @@
-// "Pruning list waiting": sent to editors when a run adds undecided candidates. Values are HTML-escaped
-// because paths come from imported documents.
-import type { NewOutboxMessage } from '../mail/outbox.repository.js';
+// "Pruning list waiting": sent to the people who decide on a doc set's pruning list when a run adds
+// undecided candidates. The notifications module frames it and adds the unsubscribe link.
+import { bulletList, button, paragraph } from '../mail/mail-layout.js';
+import type { MailContent } from '../notifications/mail-composer.service.js';
 
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 const SHOWN = 20;
 
-export function pruningWaitingMail(
-  to: { email: string; name: string },
-  docSet: { id: string; name: string },
-  paths: string[],
-  publicUrl: string,
-): NewOutboxMessage {
+export function pruningWaitingContent(name: string, docSet: { id: string; name: string }, paths: string[], publicUrl: string): MailContent {
   const url = `${publicUrl}/doc-sets/${encodeURIComponent(docSet.id)}/pruning?status=undecided`;
+  const shown = paths.slice(0, SHOWN);
   const more = paths.length > SHOWN ? [`...and ${paths.length - SHOWN} more`] : [];
-  const subject = `Pruning list waiting: ${paths.length} new page(s) to decide in ${docSet.name}`;
-  const text = [
-    `Hello ${to.name},`,
-    '',
-    `The latest run proposed ${paths.length} page(s) of ${docSet.name} for pruning:`,
-    ...paths.slice(0, SHOWN).map((p) => `- ${p}`),
-    ...more,
-    '',
-    `Decide: ${url}`,
-    '',
-    'Linkloom never deletes pages; approved pages go to your own deletion process.',
-  ].join('\n');
-  const html = `<p>Hello ${escapeHtml(to.name)},</p><p>The latest run proposed ${paths.length} page(s) of ${escapeHtml(docSet.name)} for pruning:</p><ul>${paths
-    .slice(0, SHOWN)
-    .map((p) => `<li>${escapeHtml(p)}</li>`)
-    .join(
-      '',
-    )}${more.map((m) => `<li>${escapeHtml(m)}</li>`).join('')}</ul><p><a href="${escapeHtml(url)}">Open the pruning list</a></p><p>Linkloom never deletes pages; approved pages go to your own deletion process.</p>`;
-  return { kind: 'pruning-waiting', toAddress: to.email, subject, text, html, docSetId: docSet.id };
+  const intro = `The latest run proposed ${paths.length} page(s) of ${docSet.name} for pruning:`;
+  const never = 'Linkloom never deletes pages; approved pages go to your own deletion process.';
+  return {
+    subject: `Pruning list waiting: ${paths.length} new page(s) to decide in ${docSet.name}`,
+    title: 'Pages waiting for your decision',
+    preheader: intro,
+    text: [`Hello ${name},`, '', intro, ...shown.map((p) => `- ${p}`), ...more, '', `Decide: ${url}`, '', never],
+    body: [
+      paragraph(`Hello ${name},`),
+      paragraph(intro),
+      bulletList([...shown, ...more]),
+      button('Open the pruning list', url),
+      paragraph(never, true),
+    ],
+    reason: `you decide on the pruning list of ${docSet.name}`,
+  };
 }

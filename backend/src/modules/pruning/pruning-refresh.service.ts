@@ -7,14 +7,16 @@ import { AuditService } from '../audit/audit.service.js';
 import { DocSetsService } from '../doc-sets/doc-sets.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { RunFindingsRepository, type PageFinding } from '../tasks/run-findings.repository.js';
-import { UsersRepository } from '../users/users.repository.js';
-import { pruningWaitingMail } from './pruning-mail.js';
+import { MailComposer } from '../notifications/mail-composer.service.js';
+import { NotificationSettingsService } from '../notifications/notification-settings.service.js';
+import { pruningWaitingContent } from './pruning-mail.js';
 import { proposeCandidates } from './pruning-rules.js';
 import { type NewCandidate, PruningRepository } from './pruning.repository.js';
 
 /**
  * After every finished run: rebuilds the doc set's pruning list (rule matches + nominated + decided pages),
- * flags approved pages that gained inbound links, and mails editors when new undecided candidates appear.
+ * flags approved pages that gained inbound links, and mails the people who decide when new undecided
+ * candidates appear (those who have not switched that mail off).
  */
 @Injectable()
 export class PruningRefreshService implements OnModuleInit {
@@ -23,7 +25,8 @@ export class PruningRefreshService implements OnModuleInit {
     private readonly repository: PruningRepository,
     private readonly findings: RunFindingsRepository,
     private readonly docSets: DocSetsService,
-    private readonly users: UsersRepository,
+    private readonly settings: NotificationSettingsService,
+    private readonly composer: MailComposer,
     private readonly audit: AuditService,
     private readonly mail: MailService,
     private readonly database: DbService,
@@ -60,9 +63,10 @@ export class PruningRefreshService implements OnModuleInit {
     const regained = decisions.filter(
       (d) => d.decision === 'approve' && !d.flaggedAt && (pages.get(d.path)?.inboundCount ?? 0) > (d.inboundAtDecision ?? 0),
     );
-    const editors = fresh.length
-      ? (await this.users.list(0, 500)).rows.filter((u) => !u.disabled && (u.role === 'editor' || u.role === 'admin'))
-      : [];
+    const deciders = fresh.length ? await this.settings.recipients('pruning-waiting', { docSetId }) : [];
+    const messages = deciders.map((d) =>
+      this.composer.compose(d, 'pruning-waiting', pruningWaitingContent(d.name, docSet, fresh, this.config.publicUrl), { docSetId }),
+    );
     await this.database.db.transaction(async (tx) => {
       await this.repository.replaceCandidates(docSetId, rows, tx);
       await this.repository.advanceVersion(docSetId, null, tx, runId);
@@ -78,11 +82,7 @@ export class PruningRefreshService implements OnModuleInit {
           { docSetId, executor: tx },
         );
       }
-      if (fresh.length)
-        await this.mail.enqueue(
-          editors.map((e) => pruningWaitingMail(e, docSet, fresh, this.config.publicUrl)),
-          tx,
-        );
+      await this.mail.enqueue(messages, tx);
     });
     return fresh;
   }

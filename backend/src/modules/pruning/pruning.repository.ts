@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { and, asc, count, eq, getTableColumns, inArray, isNull, notInArray, type SQL, sql } from 'drizzle-orm';
+import { and, asc, count, eq, getTableColumns, gt, inArray, isNull, notExists, notInArray, type SQL, sql } from 'drizzle-orm';
 import { DbService } from '../../db/db.service.js';
 import type { Executor } from '../../db/database.js';
 import {
@@ -120,6 +120,31 @@ export class PruningRepository {
       .from(pruningDecisions)
       .where(and(eq(pruningDecisions.docSetId, docSetId), only ? eq(pruningDecisions.decision, only) : undefined))
       .orderBy(asc(pruningDecisions.path));
+  }
+
+  /** Decisions made after `since`, oldest first. */
+  async decisionsSince(docSetId: string, since: Date): Promise<PruningDecisionRow[]> {
+    return this.database.db
+      .select()
+      .from(pruningDecisions)
+      .where(and(eq(pruningDecisions.docSetId, docSetId), gt(pruningDecisions.decidedAt, since)))
+      .orderBy(asc(pruningDecisions.decidedAt), asc(pruningDecisions.path))
+      .limit(200);
+  }
+
+  /** Pages on the list that wait for a decision: never decided, or decided and flagged for another look. */
+  async waitingCount(docSetId: string): Promise<number> {
+    const decided = this.database.db
+      .select({ path: pruningDecisions.path })
+      .from(pruningDecisions)
+      .where(
+        and(eq(pruningDecisions.docSetId, docSetId), eq(pruningDecisions.path, pruningCandidates.path), isNull(pruningDecisions.flaggedAt)),
+      );
+    const [{ value }] = await this.database.db
+      .select({ value: count() })
+      .from(pruningCandidates)
+      .where(and(eq(pruningCandidates.docSetId, docSetId), eq(pruningCandidates.inLatestRun, true), notExists(decided)));
+    return value;
   }
 
   async upsertDecisions(rows: NewDecision[], tx: Executor): Promise<void> {

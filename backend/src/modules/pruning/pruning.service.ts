@@ -171,6 +171,15 @@ export class PruningService {
     };
   }
 
+  /** For the digest: decisions made since `since` (none without a start) and how many pages wait for one. */
+  async digestFacts(docSetId: string, since: Date | null) {
+    const decisions = since ? await this.repository.decisionsSince(docSetId, since) : [];
+    return {
+      decisions: decisions.map((d) => ({ path: d.path, decision: d.decision, by: d.decidedByName, at: d.decidedAt })),
+      waiting: await this.repository.waitingCount(docSetId),
+    };
+  }
+
   private async item(docSetId: string, path: string): Promise<PruningItem | null> {
     const [row] = await this.repository.candidates(docSetId, [path]);
     if (!row) return null;

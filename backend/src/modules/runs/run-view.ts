@@ -4,6 +4,7 @@ import type { RunRow } from '../../db/schema/index.js';
 export function toRunView(row: RunRow) {
   return {
     id: row.id,
+    number: row.number,
     docSetId: row.docSetId,
     snapshotId: row.snapshotId,
     status: row.status,

@@ -11,6 +11,8 @@ import { PageDetailService } from './pages/page-detail.service.js';
 import { PageListRepository } from './pages/page-list.repository.js';
 import { PageMetricsRepository } from './page-metrics.repository.js';
 import { RunExecutor } from './run-executor.service.js';
+import { RunHistoryRepository } from './run-history.repository.js';
+import { RunHistoryService } from './run-history.service.js';
 import { RunInputsRepository } from './run-inputs.repository.js';
 import { RunLookup } from './run-lookup.service.js';
 import { RunResultsController } from './run-results.controller.js';
@@ -36,6 +38,8 @@ import { SuggestionsService } from './suggestions/suggestions.service.js';
     RunExecutor,
     RunLookup,
     RunsService,
+    RunHistoryRepository,
+    RunHistoryService,
     RunResultsService,
     PageListRepository,
     PageDetailRepository,
@@ -51,6 +55,6 @@ import { SuggestionsService } from './suggestions/suggestions.service.js';
     ExportRepository,
     ExportService,
   ],
-  exports: [RunsService, FindingsService],
+  exports: [RunsService, FindingsService, RunHistoryService],
 })
 export class RunsModule {}

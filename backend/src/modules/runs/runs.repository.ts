@@ -24,9 +24,11 @@ export class RunsRepository {
     settings: DocSetSettings;
     createdBy: string | null;
   }): Promise<RunRow> {
+    // The next number of the doc set, in the same statement, so the numbers follow the queue order.
+    const number = sql<number>`(select coalesce(max(${runs.number}), 0) + 1 from ${runs} where ${runs.docSetId} = ${values.docSetId})`;
     const [row] = await this.db
       .insert(runs)
-      .values({ ...values, status: 'queued' })
+      .values({ ...values, number, status: 'queued' })
       .returning();
     return row;
   }

@@ -2,33 +2,26 @@ import { randomUUID } from 'node:crypto';
 import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
 import { SchedulerRegistry } from '@nestjs/schedule';
 import { CronJob } from 'cron';
+import type { NightlyDocSetResult, NightlyResult } from '@linkloom/shared';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config.js';
 import { DomainEvents } from '../../common/events/domain-events.js';
 import { LifecycleService } from '../../common/lifecycle/lifecycle.service.js';
 import { DocSetsService } from '../doc-sets/doc-sets.service.js';
 import { IngestService } from '../ingest/ingest.service.js';
-import { DigestService } from '../notifications/digest.service.js';
+import { DigestService } from '../digest/digest.service.js';
+import { RunHistoryService } from '../runs/run-history.service.js';
 import { RunsService } from '../runs/runs.service.js';
 import { JobLeaseRepository } from './job-lease.repository.js';
 import { nextOccurrence, wasMissed } from './next-nightly.js';
 
 export const NIGHTLY = 'nightly';
+
 const LEASE_SECONDS = 15 * 60;
 const RUN_WAIT_MS = 60 * 60 * 1000;
 
 export type NightlyTrigger = 'clock' | 'run-now' | 'catch-up';
-export interface NightlyOutcome {
-  status: 'finished' | 'skipped';
-  reason?: string;
-  docSets: {
-    docSetId: string;
-    name: string;
-    action: 're-read folder' | 're-analysed';
-    outcome: 'finished' | 'failed';
-    runId?: string;
-    message?: string;
-  }[];
-}
+export type NightlyOutcome = Omit<NightlyResult, 'trigger'>;
+type DocSetOutcome = NightlyDocSetResult;
 
 /**
  * Every night, for each doc set with nightly runs on: re-read its server folder when it has one (which
@@ -46,6 +39,7 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
     private readonly leases: JobLeaseRepository,
     private readonly docSets: DocSetsService,
     private readonly runs: RunsService,
+    private readonly history: RunHistoryService,
     private readonly digest: DigestService,
     private readonly ingest: IngestService,
     private readonly events: DomainEvents,
@@ -113,7 +107,7 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
     return outcome;
   }
 
-  private async runFor(docSetId: string, name: string, hasFolder: boolean): Promise<NightlyOutcome['docSets'][number]> {
+  private async runFor(docSetId: string, name: string, hasFolder: boolean): Promise<DocSetOutcome> {
     const action = hasFolder ? 're-read folder' : 're-analysed';
     const done = this.waitFor(docSetId);
     try {
@@ -124,12 +118,13 @@ export class NightlyJobService implements OnModuleInit, OnApplicationBootstrap, 
       return { docSetId, name, action, outcome: 'failed', message: (error as Error).message };
     }
     const result = await done;
-    if (result.ok && result.runId) {
-      await this.digest
-        .sendForRun(docSetId, result.runId)
-        .catch((error) => this.logger.error(`The digest of run ${result.runId} failed: ${String(error)}`));
-    }
-    return { docSetId, name, action, outcome: result.ok ? 'finished' : 'failed', runId: result.runId, message: result.message };
+    if (!result.ok || !result.runId) return { docSetId, name, action, outcome: 'failed', runId: result.runId, message: result.message };
+    const digestSentTo = await this.digest.sendForRun(docSetId, result.runId).catch((error) => {
+      this.logger.error(`The digest of run ${result.runId} failed: ${String(error)}`);
+      return 0;
+    });
+    const run = await this.history.finishedRun(docSetId, result.runId);
+    return { docSetId, name, action, outcome: 'finished', runId: result.runId, runNumber: run?.number ?? null, digestSentTo };
   }
 
   private waitFor(docSetId: string): Promise<{ ok: boolean; runId?: string; message?: string }> {

@@ -23,6 +23,7 @@ export interface PageFinding {
 export interface RunRef {
   id: string;
   snapshotId: string;
+  number?: number | null;
 }
 
 const BROKEN = ['broken', 'broken-anchor'];
@@ -43,7 +44,11 @@ export class RunFindingsRepository {
   }
 
   async runById(runId: string): Promise<RunRef | null> {
-    const [row] = await this.database.db.select({ id: runs.id, snapshotId: runs.snapshotId }).from(runs).where(eq(runs.id, runId)).limit(1);
+    const [row] = await this.database.db
+      .select({ id: runs.id, snapshotId: runs.snapshotId, number: runs.number })
+      .from(runs)
+      .where(eq(runs.id, runId))
+      .limit(1);
     return row ?? null;
   }
 

@@ -23,6 +23,7 @@ export function toTaskItem(row: TaskWithNames, now = new Date()): TaskItem {
     status: row.status,
     verification: row.verification,
     verifiedAt: row.verifiedAt?.toISOString() ?? null,
+    check: row.lastCheck ?? null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };

@@ -142,8 +142,8 @@ describe('fix tasks', () => {
     expect(response.body.items).toHaveLength(2);
     const cranes = response.body.items.find((i: { pagePath: string }) => i.pagePath === 'cranes/maintenance.md');
     expect(cranes.title).toBe('Repair broken links on cranes/maintenance.md (2)');
-    expect(cranes.details).toContain('line 12: ../safety/lockout.md (broken)');
-    expect(cranes.details).toContain('line 40: manual.md#torque (broken-anchor)');
+    expect(cranes.details).toContain('cranes/maintenance.md line 12: ../safety/lockout.md (broken)');
+    expect(cranes.details).toContain('cranes/maintenance.md line 40: manual.md#torque (broken-anchor)');
     expect(cranes.finding.brokenLinks).toHaveLength(2);
     const viewer = await t.http
       .post('/api/tasks/bulk')
@@ -188,32 +188,145 @@ describe('fix tasks', () => {
     expect((await t.http.get('/api/tasks?status=closed').set('Authorization', editor)).status).toBe(400);
   });
 
-  it('follows the page into the next snapshot and verifies, flags and reopens by what each run shows', async () => {
+  it('turns selected links into tasks holding exactly those links: one per row, or one grouped task', async () => {
+    const editor = await as('editor');
+    const lockout = { sourcePath: 'cranes/maintenance.md', href: '../safety/lockout.md', line: 12 };
+    const torque = { sourcePath: 'cranes/maintenance.md', href: 'manual.md#torque', line: 40 };
+    const perRow = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', editor)
+      .send({ docSetId, kind: 'repair-broken-links', links: [lockout], grouping: 'per-row', assigneeId: ids.writer });
+    expect(perRow.status).toBe(201);
+    expect(perRow.body.items).toHaveLength(1);
+    // Only the selected link, not every broken link of the page.
+    expect(perRow.body.items[0].finding.brokenLinks).toEqual([{ ...lockout, status: 'broken' }]);
+    expect(perRow.body.items[0].title).toBe('Repair broken link on cranes/maintenance.md: ../safety/lockout.md');
+    const grouped = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', editor)
+      .send({ docSetId, kind: 'repair-broken-links', links: [lockout, torque], grouping: 'grouped', assigneeId: ids.writer });
+    expect(grouped.body.items).toHaveLength(1);
+    expect(grouped.body.items[0].finding.brokenLinks.map((l: { href: string }) => l.href)).toEqual([
+      '../safety/lockout.md',
+      'manual.md#torque',
+    ]);
+    expect(grouped.body.items[0].details).toContain('cranes/maintenance.md line 40: manual.md#torque (broken-anchor)');
+  });
+
+  it('refuses a selected link the latest run does not find, and creates nothing (422)', async () => {
+    const before = (await db.select({ n: count() }).from(tasks))[0].n;
+    const response = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', await as('editor'))
+      .send({ docSetId, kind: 'repair-broken-links', links: [{ sourcePath: 'index.md', href: 'made-up.md', line: 1 }] });
+    expect(response.status).toBe(422);
+    expect(response.body.code).toBe('FINDING_NOT_IN_LATEST_RUN');
+    expect(response.body.details).toEqual([{ sourcePath: 'index.md', href: 'made-up.md', line: 1 }]);
+    expect((await db.select({ n: count() }).from(tasks))[0].n).toBe(before);
+    const both = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', await as('editor'))
+      .send({ docSetId, kind: 'other', pagePaths: ['index.md'], links: [{ sourcePath: 'index.md', href: 'x.md', line: 1 }] });
+    expect(both.status).toBe(400);
+  });
+
+  it('groups selected pages into one task that every listed page shows', async () => {
+    const editor = await as('editor');
+    const response = await t.http
+      .post('/api/tasks/bulk')
+      .set('Authorization', editor)
+      .send({ docSetId, kind: 'add-outbound-links', pagePaths: ['tides/tables.md', 'index.md'], grouping: 'grouped' });
+    expect(response.body.items).toHaveLength(1);
+    const task = response.body.items[0];
+    expect(task.finding.pages).toEqual([
+      { path: 'tides/tables.md', flags: ['dead-end'] },
+      { path: 'index.md', flags: [] },
+    ]);
+    const onSecondPage = await t.http
+      .get(`/api/tasks?docSetId=${docSetId}&pagePath=index.md&kind=add-outbound-links`)
+      .set('Authorization', editor);
+    expect(onSecondPage.body.items.map((i: { id: string }) => i.id)).toContain(task.id);
+  });
+
+  it('keeps "verified" for runs: a person setting it gets a 400 that says why', async () => {
+    const [task] = (await t.http.get(`/api/tasks?docSetId=${docSetId}`).set('Authorization', await as('editor'))).body.items;
+    const response = await t.http
+      .patch(`/api/tasks/${task.id}`)
+      .set('Authorization', await as('editor'))
+      .send({ status: 'verified' });
+    expect(response.status).toBe(400);
+    expect(response.body.message).toContain('"verified" is set by a run');
+  });
+
+  it('follows the page into the next snapshot and verifies, flags and reopens by what each run shows, link by link', async () => {
     const editor = await as('editor');
     const find = async (pagePath: string, kind: string) =>
-      (await t.http.get(`/api/tasks?docSetId=${docSetId}&pagePath=${pagePath}&kind=${kind}`).set('Authorization', editor)).body.items[0];
-    const cranes = await find('cranes/maintenance.md', 'repair-broken-links');
+      (await t.http.get(`/api/tasks?docSetId=${docSetId}&pagePath=${pagePath}&kind=${kind}&pageSize=100`).set('Authorization', editor)).body
+        .items;
+    const grouped = (await find('cranes/maintenance.md', 'repair-broken-links')).find(
+      (x: { title: string; finding: { brokenLinks?: unknown[] } }) => x.finding.brokenLinks?.length === 2 && x.title.startsWith('Repair 2'),
+    );
     await t.http
-      .patch(`/api/tasks/${cranes.id}`)
+      .patch(`/api/tasks/${grouped.id}`)
       .set('Authorization', await as('writer'))
       .send({ status: 'done' });
     const events = t.app.get(DomainEvents);
-    // Run 2: the berth page gained links, the crane links are still broken.
-    const second = basePages().map((p) => (p.path === 'berths/allocation.md' ? { ...p, orphan: false } : p));
+    // Run 2: the berth page gained links; of the two crane links only the lockout one was repaired.
+    const second = basePages().map((p) => {
+      if (p.path === 'berths/allocation.md') return { ...p, orphan: false };
+      if (p.path === 'cranes/maintenance.md')
+        return { ...p, brokenLinks: [{ href: 'manual.md#torque', line: 41, status: 'broken-anchor' as const }] };
+      return p;
+    });
     const run2 = await insertFixtureRun(db, docSetId, second);
     await events.emit('run.finished', { docSetId, runId: run2.runId, trigger: 'manual' });
-    expect(await find('berths/allocation.md', 'add-inbound-links')).toMatchObject({ status: 'done', verification: 'verified' });
-    expect(await find('cranes/maintenance.md', 'repair-broken-links')).toMatchObject({ status: 'done', verification: 'flagged' });
-    expect(await find('tides/tables.md', 'add-outbound-links')).toMatchObject({ status: 'open', verification: null });
-    // Run 3: the orphan is back.
+    const [berth] = await find('berths/allocation.md', 'add-inbound-links');
+    expect(berth).toMatchObject({ status: 'verified', verification: 'verified', check: { outcome: 'verified', runNumber: 2 } });
+    const flagged = (await t.http.get(`/api/tasks/${grouped.id}`).set('Authorization', editor)).body;
+    expect(flagged).toMatchObject({ status: 'done', verification: 'flagged' });
+    expect(flagged.check.items.map((i: { href: string; stillFound: boolean; line: number }) => [i.href, i.stillFound, i.line])).toEqual([
+      ['../safety/lockout.md', false, 12],
+      ['manual.md#torque', true, 41],
+    ]);
+    expect(flagged.events.at(-1).body).toBe(
+      'Marked done, but run 2 still finds 1 of 2: cranes/maintenance.md line 41: manual.md#torque (broken-anchor).',
+    );
+
+    // Run 3: the orphan is back: the task reopens and its assignee (the page owner, the writer) is told.
+    const reopenMails = async () =>
+      (
+        await db
+          .select({ n: count() })
+          .from(outbox)
+          .where(and(eq(outbox.toAddress, WRITER), eq(outbox.kind, 'task-reopened')))
+      )[0].n;
+    const before = await reopenMails();
     const run3 = await insertFixtureRun(db, docSetId, basePages());
     await events.emit('run.finished', { docSetId, runId: run3.runId, trigger: 'manual' });
-    const berth = await find('berths/allocation.md', 'add-inbound-links');
-    expect(berth).toMatchObject({ status: 'open', verification: null });
-    const history = (await t.http.get(`/api/tasks/${berth.id}`).set('Authorization', editor)).body.events.map(
-      (e: { body: string }) => e.body,
-    );
-    expect(history.some((b: string) => b.includes('verified'))).toBe(true);
-    expect(history.at(-1)).toContain('reopened');
+    const reopened = (await t.http.get(`/api/tasks/${berth.id}`).set('Authorization', editor)).body;
+    expect(reopened).toMatchObject({ status: 'open', verification: null, check: { outcome: 'reopened', runNumber: 3 } });
+    expect(reopened.events.at(-1).body).toBe('Run 3 finds it again, so it is reopened. Still found: 1 of 1: berths/allocation.md.');
+    expect(await reopenMails()).toBe(before + 1);
+    const [mail] = await db
+      .select()
+      .from(outbox)
+      .where(and(eq(outbox.toAddress, WRITER), eq(outbox.kind, 'task-reopened')));
+    expect(mail.headers['List-Unsubscribe-Post']).toBe('List-Unsubscribe=One-Click');
+    expect(mail.text).toContain('reopened by run 3');
+
+    // With "task reopened" switched off, the next reopening is recorded but mails nobody.
+    await t.http
+      .patch('/api/me/notifications')
+      .set('Authorization', await as('writer'))
+      .send({ kinds: { 'task-reopened': false } });
+    const run4 = await insertFixtureRun(db, docSetId, second);
+    await events.emit('run.finished', { docSetId, runId: run4.runId, trigger: 'manual' });
+    const run5 = await insertFixtureRun(db, docSetId, basePages());
+    await events.emit('run.finished', { docSetId, runId: run5.runId, trigger: 'manual' });
+    expect((await t.http.get(`/api/tasks/${berth.id}`).set('Authorization', editor)).body.check).toMatchObject({
+      outcome: 'reopened',
+      runNumber: 5,
+    });
+    expect(await reopenMails()).toBe(before + 1);
   });
 });

@@ -12,14 +12,18 @@ import {
   listTasksQuerySchema,
   type UpdateTaskInput,
   updateTaskSchema,
-} from './task.schemas.js';
+} from '@linkloom/shared';
+import { TaskCreationService } from './task-creation.service.js';
 import { TasksService } from './tasks.service.js';
 
 @ApiTags('tasks')
 @ApiBearerAuth()
 @Controller('tasks')
 export class TasksController {
-  constructor(private readonly tasks: TasksService) {}
+  constructor(
+    private readonly tasks: TasksService,
+    private readonly creation: TaskCreationService,
+  ) {}
 
   @Get()
   @ApiZodQuery(listTasksQuerySchema)
@@ -30,21 +34,21 @@ export class TasksController {
   @Get('assignees')
   @MinRole('editor')
   assignees() {
-    return this.tasks.assignees().then((items) => ({ items, total: items.length, page: 1, pageSize: items.length }));
+    return this.tasks.assigneeOptions().then((items) => ({ items, total: items.length, page: 1, pageSize: items.length }));
   }
 
   @Post()
   @MinRole('editor')
   @ApiZodBody(createTaskSchema)
   create(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(createTaskSchema)) body: CreateTaskInput) {
-    return this.tasks.create(actor, body);
+    return this.creation.create(actor, body);
   }
 
   @Post('bulk')
   @MinRole('editor')
   @ApiZodBody(bulkCreateTasksSchema)
   bulkCreate(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(bulkCreateTasksSchema)) body: BulkCreateTasksInput) {
-    return this.tasks.bulkCreate(actor, body);
+    return this.creation.createMany(actor, body).then((items) => ({ items }));
   }
 
   @Get(':taskId')

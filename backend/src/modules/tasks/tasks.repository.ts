@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { and, asc, count, desc, eq, getTableColumns, inArray, lt, ne, type SQL, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, getTableColumns, inArray, lt, ne, or, type SQL, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { DbService } from '../../db/db.service.js';
 import type { Executor } from '../../db/database.js';
@@ -77,6 +77,25 @@ export class TasksRepository {
     return { rows, total: value };
   }
 
+  /** Status changes that runs made, oldest first, with the task's title, page and assignee. */
+  async statusChangesByRuns(runIds: string[]) {
+    if (runIds.length === 0) return [];
+    return this.database.db
+      .select({
+        taskId: taskEvents.taskId,
+        runId: sql<string>`${taskEvents.runId}`,
+        to: sql<unknown>`${taskEvents.changes} -> 'status' ->> 'to'`,
+        title: tasks.title,
+        pagePath: tasks.pagePath,
+        assigneeName: assignee.name,
+      })
+      .from(taskEvents)
+      .innerJoin(tasks, eq(tasks.id, taskEvents.taskId))
+      .leftJoin(assignee, eq(assignee.id, tasks.assigneeId))
+      .where(and(inArray(taskEvents.runId, runIds), sql`(${taskEvents.changes} -> 'status') is not null`))
+      .orderBy(asc(taskEvents.at), asc(taskEvents.id));
+  }
+
   /** Tasks a run can verify: every one not closed as won't fix, in one doc set. */
   async verifiable(docSetId: string, kinds: TaskRow['kind'][]): Promise<TaskRow[]> {
     return this.database.db
@@ -93,6 +112,13 @@ export class TasksRepository {
       .leftJoin(docSets, eq(docSets.id, tasks.docSetId));
   }
 
+  /** A task is about a page when it is its page, or a grouped task lists the page or a link on it. */
+  private aboutPage(path: string): SQL {
+    const listed = JSON.stringify({ pages: [{ path }] });
+    const linkedFrom = JSON.stringify({ brokenLinks: [{ sourcePath: path }] });
+    return or(eq(tasks.pagePath, path), sql`${tasks.finding} @> ${listed}::jsonb`, sql`${tasks.finding} @> ${linkedFrom}::jsonb`)!;
+  }
+
   private where(filter: TaskFilter): SQL | undefined {
     const conditions: (SQL | undefined)[] = [
       filter.assigneeId ? eq(tasks.assigneeId, filter.assigneeId) : undefined,
@@ -100,7 +126,7 @@ export class TasksRepository {
       filter.kind ? eq(tasks.kind, filter.kind) : undefined,
       filter.docSetId ? eq(tasks.docSetId, filter.docSetId) : undefined,
       filter.verification ? eq(tasks.verification, filter.verification) : undefined,
-      filter.pagePath ? eq(tasks.pagePath, filter.pagePath) : undefined,
+      filter.pagePath ? this.aboutPage(filter.pagePath) : undefined,
       filter.overdueOn ? and(lt(tasks.dueDate, filter.overdueOn), inArray(tasks.status, ['open', 'in-progress'])) : undefined,
     ];
     const present = conditions.filter((c): c is SQL => c !== undefined);

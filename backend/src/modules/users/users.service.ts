@@ -18,6 +18,17 @@ export class UsersService {
     return { items: rows.map(toUserDetails), total, page, pageSize };
   }
 
+  /** The user when they exist and may sign in, else null (for links that act on a person's behalf). */
+  async findActive(id: string): Promise<UserDetails | null> {
+    const row = await this.users.findById(id);
+    return row && !row.disabled ? toUserDetails(row) : null;
+  }
+
+  async findActiveByEmail(email: string): Promise<UserDetails | null> {
+    const row = await this.users.findByEmail(email);
+    return row && !row.disabled ? toUserDetails(row) : null;
+  }
+
   async create(actor: AuthUser | null, input: CreateUserInput): Promise<UserDetails> {
     if (await this.users.findByEmail(input.email)) {
       throw conflict('EMAIL_TAKEN', `A user with the e-mail ${input.email} already exists.`);

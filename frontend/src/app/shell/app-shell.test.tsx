@@ -25,8 +25,18 @@ describe('app shell', () => {
     expect(labels).toEqual(['Overview', 'Pages', 'Findings', 'Link map', 'Search', 'Runs', 'Settings']);
     expect(within(nav).getByRole('link', { name: 'Runs' }).getAttribute('aria-current')).toBe('page');
     expect(await screen.findByText(/Demo data/)).toBeTruthy();
-    // A viewer sees no administration entries.
+    // A viewer sees no administration entries, and reads all tasks: never assigned one, they have no "My tasks".
     expect(screen.queryByRole('link', { name: 'Users' })).toBeNull();
+    expect(screen.getByRole('link', { name: 'Tasks' }).getAttribute('href')).toBe('/tasks');
+    expect(screen.queryByRole('link', { name: 'My tasks' })).toBeNull();
+  });
+
+  it('gives writers "My tasks" and not the readers’ "Tasks" entry', async () => {
+    signInAs('writer');
+    vi.stubGlobal('fetch', api(false).fn);
+    renderWithProviders(<AppShell />, { route: '/', path: '/*' });
+    expect(await screen.findByRole('link', { name: 'My tasks' })).toBeTruthy();
+    expect(screen.queryByRole('link', { name: 'Tasks' })).toBeNull();
   });
 
   it('gives admins the Users entry and hides the demo notice on real data', async () => {

@@ -18,7 +18,7 @@ function isHere(pathname: string, target: string, end?: boolean): boolean {
 /** Renders a nav config list, leaving out entries the role cannot use. */
 export function NavList({ title, items, role, docSetId = '' }: NavListProps) {
   const { pathname } = useLocation();
-  const visible = items.filter((item) => roleAtLeast(role, item.minRole));
+  const visible = items.filter((item) => roleAtLeast(role, item.minRole) && (!item.maxRole || roleAtLeast(item.maxRole, role)));
   if (visible.length === 0) return null;
   return (
     <List

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Avatar, Button, Divider, ListItemIcon, Menu, MenuItem, Typography } from '@mui/material';
 import KeyOutlined from '@mui/icons-material/KeyOutlined';
+import NotificationsOutlined from '@mui/icons-material/NotificationsOutlined';
 import Logout from '@mui/icons-material/Logout';
 import { useSession } from '../../lib/session.js';
 import { useSignOut } from '../../features/auth/api/sign-out.js';
@@ -14,6 +15,11 @@ export function UserMenu() {
   if (!session) return null;
   const { user } = session;
   const close = () => setAnchor(null);
+  const entries = [
+    { label: 'Notifications', icon: NotificationsOutlined, act: () => navigate('/account/notifications') },
+    { label: 'Change password', icon: KeyOutlined, act: () => navigate('/account') },
+    { label: 'Sign out', icon: Logout, act: () => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') }) },
+  ];
   return (
     <>
       <Button
@@ -35,28 +41,20 @@ export function UserMenu() {
           </Typography>
         </MenuItem>
         <Divider />
-        <MenuItem
-          onClick={() => {
-            close();
-            navigate('/account');
-          }}
-        >
-          <ListItemIcon>
-            <KeyOutlined fontSize="small" />
-          </ListItemIcon>
-          Change password
-        </MenuItem>
-        <MenuItem
-          onClick={() => {
-            close();
-            signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') });
-          }}
-        >
-          <ListItemIcon>
-            <Logout fontSize="small" />
-          </ListItemIcon>
-          Sign out
-        </MenuItem>
+        {entries.map(({ label, icon: Icon, act }) => (
+          <MenuItem
+            key={label}
+            onClick={() => {
+              close();
+              act();
+            }}
+          >
+            <ListItemIcon>
+              <Icon fontSize="small" />
+            </ListItemIcon>
+            {label}
+          </MenuItem>
+        ))}
       </Menu>
     </>
   );

@@ -42,6 +42,14 @@ export class DiffRepository {
     );
   }
 
+  /** Pages of run `a` that run `b` does not have (by path): added pages, or, read the other way, removed ones. */
+  async pagesMissingFrom(a: string, b: string): Promise<ChangeList<{ path: string; title: string }>> {
+    return this.listed(
+      sql`select a.path, a.title from page_metrics a where a.run_id = ${a}
+          and not exists (select 1 from page_metrics b where b.run_id = ${b} and b.path = a.path)`,
+    );
+  }
+
   /** Links with the status in snapshot `a` but not in snapshot `b`. */
   async linksOnlyIn(a: string, b: string, status: string): Promise<ChangeList<{ sourcePath: string; href: string }>> {
     const select = (snapshotId: string) =>

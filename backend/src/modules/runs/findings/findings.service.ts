@@ -33,9 +33,14 @@ export class FindingsService {
     return this.findings.scoreDistribution(run.id);
   }
 
-  /** What appeared in `run` and disappeared since `against`, per finding kind, and the largest score moves. */
+  /** What appeared in `run` and disappeared since `against`, per finding kind (and `pages`: added and removed), and the largest score moves. */
   async diff(run: RunRow, against: RunRow) {
-    const kinds: Record<string, unknown> = {};
+    const kinds: Record<string, unknown> = {
+      pages: {
+        appeared: await this.diffs.pagesMissingFrom(run.id, against.id),
+        disappeared: await this.diffs.pagesMissingFrom(against.id, run.id),
+      },
+    };
     for (const [kind, flag] of Object.entries(PAGE_FINDINGS)) {
       kinds[kind] = {
         appeared: await this.diffs.pagesOnlyIn(run.id, against.id, flag),

@@ -1,5 +1,6 @@
 // Test helper: writes a ready snapshot, its pages and broken links, a finished run and its page_metrics
 // directly, so work features can be tested without the importer and the analysis. Values are invented.
+import { sql } from 'drizzle-orm';
 import type { Database } from '../../../db/database.js';
 import { docSets, links, pageMetrics, pages, runs, snapshots } from '../../../db/schema/index.js';
 
@@ -70,6 +71,7 @@ export async function insertFixtureRun(
     .insert(runs)
     .values({
       docSetId,
+      number: sql<number>`(select coalesce(max(${runs.number}), 0) + 1 from ${runs} where ${runs.docSetId} = ${docSetId})`,
       snapshotId: snapshot.id,
       status: 'finished',
       trigger: 'manual',

@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
-import { Alert, Box, Button, Paper, Stack, TextField } from '@mui/material';
+import { Link as RouterLink } from 'react-router-dom';
+import { Alert, Box, Button, Link, Paper, Stack, TextField, Typography } from '@mui/material';
 import { PageHeader } from '../../../components/ui/page-header.js';
 import { useNotifier } from '../../../components/ui/notifier.js';
 import { errorMessage } from '../../../lib/api-client.js';
 import { useSession } from '../../../lib/session.js';
 import { useChangePassword } from '../api/change-password.js';
-import { SubscriptionsSection } from '../../subscriptions/components/subscriptions-section.js';
 
 /** Mirrors the server's rule (shared/src/schemas/users.ts): 8 to 256 characters. */
 export function newPasswordProblem(next: string, repeat: string, current: string): string | null {
@@ -82,7 +82,12 @@ export default function AccountRoute() {
           </Stack>
         </Box>
       </Paper>
-      <SubscriptionsSection />
+      <Typography variant="body2" color="text.secondary" sx={{ mt: 2 }}>
+        Which e-mails you get, and the time zone of their dates:{' '}
+        <Link component={RouterLink} to="/account/notifications">
+          Notifications
+        </Link>
+      </Typography>
     </Box>
   );
 }

@@ -9,10 +9,12 @@ import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { useDocSets } from '../api/get-doc-sets.js';
 import { DocSetCard } from '../components/doc-set-card.js';
 import { CreateDocSetDialog } from '../components/create-doc-set-dialog.js';
+import { MyOpenTasks } from '../../tasks/index.js';
 
 export default function DocSetsRoute() {
   const docSets = useDocSets();
   const canCreate = useRoleAtLeast('editor');
+  const doesFixes = useRoleAtLeast('writer');
   const [creating, setCreating] = useState(false);
   const newButton = canCreate && (
     <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setCreating(true)}>
@@ -21,6 +23,8 @@ export default function DocSetsRoute() {
   );
   return (
     <>
+      {/* People who fix pages see their open work first; editors only when they have some. */}
+      {doesFixes && <MyOpenTasks hideWhenEmpty={canCreate} />}
       <PageHeader
         title="Doc sets"
         subtitle="Each doc set is one body of Markdown documentation, analysed after every upload."

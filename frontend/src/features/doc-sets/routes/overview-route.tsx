@@ -14,6 +14,7 @@ import { ScoreDistributionPanel } from '../components/score-distribution-panel.j
 import { TopPagesPanel } from '../components/top-pages-panel.js';
 import { HistoryPanel } from '../components/history-panel.js';
 import { UploadArchiveDialog } from '../components/upload-archive-dialog.js';
+import { DocSetNotificationsCard } from '../../notifications/index.js';
 
 export default function OverviewRoute() {
   const { docSetId = '' } = useParams();
@@ -59,6 +60,7 @@ export default function OverviewRoute() {
           </Box>
         )}
         <HistoryPanel docSetId={docSetId} runs={runs.data} />
+        <DocSetNotificationsCard docSetId={docSetId} />
       </Stack>
       {canUpload && <UploadArchiveDialog docSetId={docSetId} open={uploading} onClose={() => setUploading(false)} />}
     </>

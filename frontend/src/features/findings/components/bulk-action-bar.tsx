@@ -3,24 +3,20 @@ import { Button, Paper, Typography } from '@mui/material';
 import AssignmentOutlined from '@mui/icons-material/AssignmentOutlined';
 import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
-import { CreateTasksDialog } from '../../tasks/components/create-tasks-dialog.js';
-import { PendingActionDialog, type FixTaskRequest, type PendingAction } from '../../pages/components/work-hook-dialog.js';
+import { CreateTasksDialog, type TaskRequest } from '../../tasks/index.js';
 
 interface BulkActionBarProps {
   count: number;
-  /** The task each selected page would get; null where tasks make no sense (links without a page). */
-  taskRequest: FixTaskRequest | null;
+  /** The selected findings as a task request; null where these rows cannot become tasks. */
+  taskRequest: TaskRequest | null;
   onExport: () => void;
   onClear: () => void;
-  /** HOOK POINT: the tasks change passes this; until then "Create tasks" explains what it will do. */
-  onCreateTasks?: (request: FixTaskRequest) => void;
 }
 
 /** Actions on the selected rows; shown only while something is selected. */
-export function BulkActionBar({ count, taskRequest, onExport, onClear, onCreateTasks }: BulkActionBarProps) {
+export function BulkActionBar({ count, taskRequest, onExport, onClear }: BulkActionBarProps) {
   const canCreateTasks = useRoleAtLeast('editor');
-  const [pending, setPending] = useState<PendingAction | null>(null);
-  const [taskDialog, setTaskDialog] = useState<FixTaskRequest | null>(null);
+  const [taskDialog, setTaskDialog] = useState<TaskRequest | null>(null);
   if (count === 0) return null;
   return (
     <Paper
@@ -33,12 +29,7 @@ export function BulkActionBar({ count, taskRequest, onExport, onClear, onCreateT
         {count} selected
       </Typography>
       {canCreateTasks && taskRequest && (
-        <Button
-          size="small"
-          variant="contained"
-          startIcon={<AssignmentOutlined />}
-          onClick={() => (onCreateTasks ? onCreateTasks(taskRequest) : setTaskDialog(taskRequest))}
-        >
+        <Button size="small" variant="contained" startIcon={<AssignmentOutlined />} onClick={() => setTaskDialog(taskRequest)}>
           Create tasks
         </Button>
       )}
@@ -48,7 +39,6 @@ export function BulkActionBar({ count, taskRequest, onExport, onClear, onCreateT
       <Button size="small" onClick={onClear}>
         Clear selection
       </Button>
-      <PendingActionDialog action={pending} onClose={() => setPending(null)} />
       <CreateTasksDialog request={taskDialog} onClose={() => setTaskDialog(null)} />
     </Paper>
   );

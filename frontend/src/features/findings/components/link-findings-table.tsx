@@ -82,15 +82,14 @@ export function LinkFindingsTable({ docSetId, runId, kind, table, label }: Findi
         selection.rows.map((l) => [l.sourcePath, l.line, l.column, l.href ?? '', l.targetPath, l.anchor, l.status, l.reason]),
       ),
     );
-  const pagePaths = [...new Set(selection.rows.map((l) => l.sourcePath))];
+  // A task holds exactly the selected links; only broken links and anchors are fix tasks of this kind.
+  const repairable = status === 'broken' || status === 'broken-anchor';
+  const selected = selection.rows.map((l) => ({ sourcePath: l.sourcePath, href: l.hrefText ?? l.href ?? '', line: l.line }));
+  const pagePaths = [...new Set(selected.map((l) => l.sourcePath))];
+  const taskRequest = repairable ? { kind: 'repair-broken-links' as const, pagePaths, links: selected } : null;
   return (
     <>
-      <BulkActionBar
-        count={selection.ids.length}
-        onExport={exportSelected}
-        onClear={selection.clear}
-        taskRequest={{ pagePaths, kind: 'repair-broken-links' }}
-      />
+      <BulkActionBar count={selection.ids.length} onExport={exportSelected} onClear={selection.clear} taskRequest={taskRequest} />
       <DataTable
         label={label}
         columns={cols}

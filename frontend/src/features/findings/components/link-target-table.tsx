@@ -12,7 +12,6 @@ import { useRowSelection } from './use-row-selection.js';
 
 const targetId = (g: LinkTargetGroup) => g.targetPath ?? g.href ?? '';
 const sourceText = (s: GroupSource) => (typeof s === 'string' ? s : `${s.sourcePath}${s.line ? `:${s.line}` : ''}`);
-const sourcePage = (s: GroupSource) => (typeof s === 'string' ? s.replace(/:\d+(:\d+)?$/, '') : s.sourcePath);
 const SHOWN_SOURCES = 3;
 
 const COLUMNS: ColumnDef<LinkTargetGroup>[] = [
@@ -54,14 +53,15 @@ export function LinkTargetTable({ docSetId, runId, kind, table, label }: Finding
         selection.rows.map((g) => [targetId(g), g.count, g.sources.map(sourceText).join(' ')]),
       ),
     );
-  const pagePaths = [...new Set(selection.rows.flatMap((g) => g.sources.map(sourcePage)))];
   return (
     <>
       <BulkActionBar
         count={selection.ids.length}
         onExport={exportSelected}
         onClear={selection.clear}
-        taskRequest={{ pagePaths, kind: 'repair-broken-links' }}
+        // A row here stands for links it does not list one by one, and a task must hold exactly the selected
+        // links: tasks are made from the one-row-per-link view.
+        taskRequest={null}
       />
       <DataTable
         label={label}

@@ -85,7 +85,7 @@ export function PageFindingsTable({ docSetId, runId, kind, table, label }: Findi
         count={selection.ids.length}
         onExport={exportSelected}
         onClear={selection.clear}
-        taskRequest={{ pagePaths: selection.ids, kind: TASK_FOR_FLAG[flag] }}
+        taskRequest={{ kind: TASK_FOR_FLAG[flag], pagePaths: selection.ids }}
       />
       <DataTable
         label={label}

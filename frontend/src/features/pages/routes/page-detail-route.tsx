@@ -13,8 +13,7 @@ import { BrokenLinksPanel } from '../components/broken-links-panel.js';
 import { SuggestionsPanel } from '../components/suggestions-panel.js';
 import { NeighbourhoodPanel } from '../components/neighbourhood-panel.js';
 import { PageActions } from '../components/page-actions.js';
-import { CreateTasksDialog, type TaskRequest } from '../../tasks/components/create-tasks-dialog.js';
-import { PageTasksPanel } from '../../tasks/components/page-tasks-panel.js';
+import { CreateTasksDialog, PageTasksPanel, type TaskRequest } from '../../tasks/index.js';
 import { NominateDialog } from '../../pruning/components/nominate-dialog.js';
 import { useState } from 'react';
 

@@ -22,6 +22,13 @@ const count = (key: keyof NonNullable<Run['counts']> & string, header: string): 
 
 export const runColumns: ColumnDef<Run, unknown>[] = [
   {
+    id: 'number',
+    header: 'Run',
+    enableSorting: false,
+    meta: { align: 'right' },
+    cell: ({ row }) => (row.original.number ? `#${row.original.number}` : '—'),
+  },
+  {
     id: 'startedAt',
     header: 'Started',
     enableSorting: false,

@@ -10,6 +10,14 @@ function runLink(result: NightlyDocSetResult): string {
   return `${base}/runs`;
 }
 
+/** "digest sent to 3 people"; a night with no change mails only those who asked for that. */
+export function digestText(result: NightlyDocSetResult): string {
+  if (result.outcome !== 'finished') return 'no digest: the run did not finish';
+  if (result.digestSentTo === undefined) return '—';
+  const n = result.digestSentTo;
+  return n === 0 ? 'digest sent to nobody (nothing to report, or no readers)' : `digest sent to ${n} ${n === 1 ? 'person' : 'people'}`;
+}
+
 /** What the last nightly job did for each doc set. */
 export function LastResultTable({ result }: { result: NightlyResult | null }) {
   if (!result || !result.docSets?.length) {
@@ -33,6 +41,7 @@ export function LastResultTable({ result }: { result: NightlyResult | null }) {
             <TableCell>Doc set</TableCell>
             <TableCell>What it did</TableCell>
             <TableCell>Outcome</TableCell>
+            <TableCell>Digest</TableCell>
             <TableCell>Run</TableCell>
           </TableRow>
         </TableHead>
@@ -49,9 +58,10 @@ export function LastResultTable({ result }: { result: NightlyResult | null }) {
                   </Typography>
                 )}
               </TableCell>
+              <TableCell>{digestText(r)}</TableCell>
               <TableCell>
                 <Link component={RouterLink} to={runLink(r)}>
-                  {r.outcome === 'finished' && r.runId ? 'Open findings of this run' : 'Open runs'}
+                  {r.outcome === 'finished' && r.runId ? `Open findings of run ${r.runNumber ?? ''}`.trim() : 'Open runs'}
                 </Link>
               </TableCell>
             </TableRow>

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Alert, Button, Stack } from '@mui/material';
 import PlayArrowOutlined from '@mui/icons-material/PlayArrowOutlined';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.js';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import { PageHeader } from '../../../components/ui/page-header.js';
@@ -23,7 +24,9 @@ export default function ScheduleRoute() {
   // Measured against the last answer, so the button frees itself on the poll that ends the wait.
   const awaitingStart = isAwaitingStart(pressed, data, schedule.dataUpdatedAt);
 
+  const [confirming, setConfirming] = useState(false);
   const start = () => {
+    setConfirming(false);
     const baseline = data?.lastStartedAt ?? null;
     runNow.mutate(undefined, {
       onSuccess: (result) => {
@@ -43,11 +46,19 @@ export default function ScheduleRoute() {
         subtitle="Each night Linkloom re-reads the server folder of every doc set with nightly runs on (or re-analyses its latest snapshot) and mails the digests."
         actions={
           canRun && (
-            <Button variant="contained" startIcon={<PlayArrowOutlined />} onClick={start} disabled={busy || !data}>
+            <Button variant="contained" startIcon={<PlayArrowOutlined />} onClick={() => setConfirming(true)} disabled={busy || !data}>
               {busy ? 'Running…' : 'Run now'}
             </Button>
           )
         }
+      />
+      <ConfirmDialog
+        open={confirming}
+        title="Run the nightly job now?"
+        body={`Every doc set with nightly runs on${data ? ` (${data.docSets.filter((d) => d.nightly).length} now)` : ''} is re-read or re-analysed, and the digests go out to their readers as at ${data?.nightlyTime ?? 'night'}. Each reader's next digest then covers only what changes after this run.`}
+        confirmLabel="Run now"
+        onConfirm={start}
+        onClose={() => setConfirming(false)}
       />
       <Stack spacing={3}>
         {runNow.data && !runNow.data.started && (

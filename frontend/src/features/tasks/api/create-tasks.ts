@@ -1,20 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { BulkCreateTasksRequest } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TaskKind } from '../types.js';
+import type { Task } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
-export interface CreateTasksInput {
-  docSetId: string;
-  kind: TaskKind;
-  pagePaths: string[];
-  title?: string;
-  details?: string;
-  assigneeId?: string | null;
-  priority?: Priority;
-  dueDate?: string | null;
-}
+export type CreateTasksInput = BulkCreateTasksRequest;
 
-/** POST /api/tasks/bulk: one task per page, details prefilled by the server from the latest run. */
+/** POST /api/tasks/bulk: tasks holding exactly the selected pages or links, one per row or one for all. */
 export function createTasks(input: CreateTasksInput): Promise<{ items: Task[] }> {
   return apiFetch<{ items: Task[] }>('/tasks/bulk', { method: 'POST', body: input });
 }

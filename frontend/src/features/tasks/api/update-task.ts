@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TaskStatus } from '../types.js';
+import type { Priority, Task, TASK_STATUSES_SET_BY_PEOPLE } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export interface UpdateTaskInput {
@@ -10,7 +10,8 @@ export interface UpdateTaskInput {
   assigneeId?: string | null;
   priority?: Priority;
   dueDate?: string | null;
-  status?: TaskStatus;
+  /** `verified` is set by runs only. */
+  status?: (typeof TASK_STATUSES_SET_BY_PEOPLE)[number];
 }
 
 export function updateTask({ id, ...patch }: UpdateTaskInput): Promise<Task> {

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { screen } from '@testing-library/react';
+import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
 import { signInAs } from '../../../testing/fixtures.js';
@@ -12,17 +12,15 @@ function api() {
     'GET /api/tasks/assignees': () => ({
       body: { items: [{ id: 'u-w', name: 'Wren Writer', email: 'w@x.test', role: 'writer' }], total: 1, page: 1, pageSize: 1 },
     }),
-    'POST /api/tasks/bulk': () => ({
-      status: 201,
-      body: {
-        items: [
-          { id: 't1', assignee: { id: 'u-w' } },
-          { id: 't2', assignee: { id: 'u-w' } },
-        ],
-      },
-    }),
+    'POST /api/tasks/bulk': () => ({ status: 201, body: { items: [{ id: 't1', assignee: { id: 'u-w' } }] } }),
   });
 }
+
+const render = (request: Parameters<typeof CreateTasksDialog>[0]['request'], onClose = vi.fn()) =>
+  renderWithProviders(<CreateTasksDialog request={request} onClose={onClose} />, {
+    route: '/doc-sets/d1/findings',
+    path: '/doc-sets/:docSetId/findings',
+  });
 
 describe('create tasks dialog', () => {
   it('creates one task per selected page for the chosen writer', async () => {
@@ -31,11 +29,8 @@ describe('create tasks dialog', () => {
     vi.stubGlobal('fetch', fake.fn);
     const onClose = vi.fn();
     const user = userEvent.setup();
-    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md', 'b.md'], kind: 'add-inbound-links' }} onClose={onClose} />, {
-      route: '/doc-sets/d1/findings',
-      path: '/doc-sets/:docSetId/findings',
-    });
-    expect(await screen.findByText('Create 2 tasks', { selector: 'h2' })).toBeTruthy();
+    render({ pagePaths: ['a.md', 'b.md'], kind: 'add-inbound-links' }, onClose);
+    expect(await screen.findByText('Create tasks for 2 selected findings', { selector: 'h2' })).toBeTruthy();
     await user.click(screen.getByLabelText('Assignee'));
     await user.click(await screen.findByRole('option', { name: 'Wren Writer (writer)' }));
     await user.click(screen.getByRole('button', { name: 'Create 2 tasks' }));
@@ -45,18 +40,41 @@ describe('create tasks dialog', () => {
       docSetId: 'd1',
       kind: 'add-inbound-links',
       pagePaths: ['a.md', 'b.md'],
+      grouping: 'per-row',
       assigneeId: 'u-w',
-      priority: 'normal',
     });
+  });
+
+  it('lists exactly the selected links and can make them one grouped task', async () => {
+    signInAs('editor');
+    const fake = api();
+    vi.stubGlobal('fetch', fake.fn);
+    const user = userEvent.setup();
+    const links = [
+      { sourcePath: 'cranes.md', href: '../safety/lockout.md', line: 12 },
+      { sourcePath: 'cranes.md', href: 'torque.md', line: 40 },
+    ];
+    render({ kind: 'repair-broken-links', pagePaths: ['cranes.md'], links });
+    const listed = await screen.findByRole('list', { name: 'Selected findings' });
+    expect(
+      within(listed)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual(['../safety/lockout.mdcranes.md, line 12', 'torque.mdcranes.md, line 40']);
+    await user.click(screen.getByLabelText('One task listing all of them'));
+    // One task now, so it may have its own title.
+    await user.type(screen.getByLabelText('Title'), 'Fix the crane links');
+    await user.click(screen.getByRole('button', { name: 'Create task' }));
+    await vi.waitFor(() => expect(fake.calls.some((c) => c.method === 'POST')).toBe(true));
+    const post = fake.calls.find((c) => c.method === 'POST')!;
+    expect(post.body).toEqual(expect.objectContaining({ links, grouping: 'grouped', title: 'Fix the crane links' }));
+    expect(post.body).not.toHaveProperty('pagePaths');
   });
 
   it('renders nothing for writers, who cannot create tasks', () => {
     signInAs('writer');
     vi.stubGlobal('fetch', api().fn);
-    renderWithProviders(<CreateTasksDialog request={{ pagePaths: ['a.md'], kind: 'other' }} onClose={() => undefined} />, {
-      route: '/doc-sets/d1/page',
-      path: '/doc-sets/:docSetId/page',
-    });
+    render({ pagePaths: ['a.md'], kind: 'other' });
     expect(screen.queryByRole('dialog')).toBeNull();
   });
 });

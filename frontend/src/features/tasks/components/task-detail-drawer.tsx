@@ -10,8 +10,9 @@ import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { useAssignees } from '../api/get-assignees.js';
 import { useTask } from '../api/get-task.js';
 import { useUpdateTask, type UpdateTaskInput } from '../api/update-task.js';
-import { KIND_LABELS, STATUS_LABELS, TASK_STATUSES, type TaskStatus } from '../types.js';
-import { TaskStatusChips } from './task-chips.js';
+import { KIND_LABELS, STATUS_LABELS, TASK_STATUSES_SET_BY_PEOPLE } from '../types.js';
+import { statusLabel, TaskStatusChips } from './task-chips.js';
+import { TaskFindingsList } from './task-findings-list.js';
 import { TaskThread } from './task-thread.js';
 
 /** One task with its details, status, assignee, comments and history. */
@@ -75,16 +76,23 @@ export function TaskDetailDrawer({ taskId, onClose }: { taskId: string | null; o
               {data.details}
             </Typography>
           )}
+          <TaskFindingsList task={data} />
           {canWork && (
             <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
               <TextField
                 select
                 label="Status"
                 value={data.status}
-                onChange={(e) => patch({ status: e.target.value as TaskStatus })}
+                onChange={(e) => patch({ status: e.target.value as (typeof TASK_STATUSES_SET_BY_PEOPLE)[number] })}
                 sx={{ flex: 1 }}
               >
-                {TASK_STATUSES.map((s) => (
+                {/* "Fixed and verified" is a run's verdict: shown when it is the status, never offered. */}
+                {data.status === 'verified' && (
+                  <MenuItem value="verified" disabled>
+                    {statusLabel(data)}
+                  </MenuItem>
+                )}
+                {TASK_STATUSES_SET_BY_PEOPLE.map((s) => (
                   <MenuItem key={s} value={s}>
                     {STATUS_LABELS[s]}
                   </MenuItem>

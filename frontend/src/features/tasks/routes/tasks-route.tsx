@@ -24,12 +24,16 @@ const DEFAULTS = {
   task: '',
 };
 
-/** "My tasks" and, for everyone but writers, "All tasks"; the open task shows in a side panel (`?task=`). */
+/**
+ * Writers: "My tasks" only. Editors and admins: "My tasks" and "All tasks". Viewers, who are never assigned
+ * work, read all tasks without any action. The open task shows in a side panel (`?task=`).
+ */
 export default function TasksRoute() {
   const [state, setState] = useUrlState(DEFAULTS);
   const isEditor = useRoleAtLeast('editor');
-  const isWriterOnly = useRoleAtLeast('writer') && !isEditor;
-  const mine = state.view === 'mine' || isWriterOnly;
+  const canBeAssigned = useRoleAtLeast('writer');
+  const isWriterOnly = canBeAssigned && !isEditor;
+  const mine = canBeAssigned && (state.view === 'mine' || isWriterOnly);
   const assignees = useAssignees(isEditor);
   const tasks = useTasks({
     assignee: mine ? 'me' : state.assignee || undefined,
@@ -44,10 +48,10 @@ export default function TasksRoute() {
   return (
     <>
       <PageHeader
-        title={mine ? 'My tasks' : 'All tasks'}
-        subtitle="Fix work made from findings. A task counts as verified when a later run no longer shows its finding."
+        title={mine ? 'My tasks' : canBeAssigned ? 'All tasks' : 'Tasks'}
+        subtitle="Fix work made from findings. A task is fixed and verified when a later run no longer finds any of its findings."
       />
-      {!isWriterOnly && (
+      {isEditor && (
         <Tabs value={mine ? 'mine' : 'all'} onChange={(_, view) => setState({ view })} sx={{ mb: 2 }} aria-label="Task lists">
           <Tab value="mine" label="My tasks" />
           <Tab value="all" label="All tasks" />
@@ -73,7 +77,13 @@ export default function TasksRoute() {
         emptyState={
           <EmptyState
             title="No tasks here"
-            hint={mine ? 'Nothing is assigned to you with these filters.' : 'Create tasks from a page or from the findings lists.'}
+            hint={
+              mine
+                ? 'Nothing is assigned to you with these filters.'
+                : isEditor
+                  ? 'Create tasks from a page or from the findings lists.'
+                  : 'No tasks match these filters.'
+            }
           />
         }
       />

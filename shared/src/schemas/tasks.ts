@@ -1,8 +1,7 @@
-// The tasks API contract (zod), checked by ZodPipe. Kept beside the module because shared/ is owned by others;
-// the front end mirrors the types in features/tasks/types.ts.
-import { listQuerySchema } from '@linkloom/shared';
+// The tasks API's request contracts (zod): the server validates with them, the front end's forms send them.
 import { z } from 'zod';
-import { TASK_KINDS, TASK_STATUSES } from '../../db/schema/work.js';
+import { listQuerySchema } from './common.js';
+import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, TASK_STATUSES_SET_BY_PEOPLE } from './work.js';
 
 const pagePath = z.string().trim().min(1).max(1024);
 const isoDate = z
@@ -11,7 +10,18 @@ const isoDate = z
   .refine((d) => !Number.isNaN(Date.parse(d)), 'not a real date');
 export const taskKindSchema = z.enum(TASK_KINDS);
 export const taskStatusSchema = z.enum(TASK_STATUSES);
-export const prioritySchema = z.enum(['low', 'normal', 'high']);
+export const prioritySchema = z.enum(TASK_PRIORITIES);
+const statusSetByPeople = z.enum(TASK_STATUSES_SET_BY_PEOPLE, {
+  error: () => `use one of ${TASK_STATUSES_SET_BY_PEOPLE.join(', ')}; "verified" is set by a run that no longer finds the findings`,
+});
+
+/** How selected findings become tasks: one task per selected row, or one task holding them all. */
+export const TASK_GROUPINGS = ['per-row', 'grouped'] as const;
+
+/** A selected link finding: the page it is on and the link as written there. */
+export const selectedLinkSchema = z
+  .object({ sourcePath: pagePath, href: z.string().min(1).max(4096), line: z.number().int().min(0) })
+  .strict();
 
 export const createTaskSchema = z
   .object({
@@ -26,18 +36,28 @@ export const createTaskSchema = z
   })
   .strict();
 
+/**
+ * Tasks from the rows an editor selected: pages (`pagePaths`) or links (`links`), never both. The tasks hold
+ * exactly those findings; `grouping` makes one task per row or a single task listing them all.
+ */
 export const bulkCreateTasksSchema = z
   .object({
     docSetId: z.string().uuid(),
     kind: taskKindSchema,
-    pagePaths: z.array(pagePath).min(1).max(500),
+    pagePaths: z.array(pagePath).max(500).default([]),
+    links: z.array(selectedLinkSchema).max(2000).default([]),
+    grouping: z.enum(TASK_GROUPINGS).default('per-row'),
     title: z.string().trim().min(1).max(300).optional(),
     details: z.string().max(20_000).optional(),
     assigneeId: z.string().uuid().nullish(),
     priority: prioritySchema.optional(),
     dueDate: isoDate.nullish(),
   })
-  .strict();
+  .strict()
+  .refine((v) => (v.pagePaths.length > 0) !== (v.links.length > 0), {
+    message: 'select either pages (pagePaths) or links (links), at least one',
+    path: ['pagePaths'],
+  });
 
 export const updateTaskSchema = z
   .object({
@@ -46,7 +66,7 @@ export const updateTaskSchema = z
     assigneeId: z.string().uuid().nullable().optional(),
     priority: prioritySchema.optional(),
     dueDate: isoDate.nullable().optional(),
-    status: taskStatusSchema.optional(),
+    status: statusSetByPeople.optional(),
   })
   .strict()
   .refine((v) => Object.keys(v).length > 0, 'nothing to change');
@@ -91,5 +111,8 @@ export const listTasksQuerySchema = listQuerySchema
 
 export type CreateTaskInput = z.infer<typeof createTaskSchema>;
 export type BulkCreateTasksInput = z.infer<typeof bulkCreateTasksSchema>;
+export type BulkCreateTasksRequest = z.input<typeof bulkCreateTasksSchema>;
+export type SelectedLink = z.infer<typeof selectedLinkSchema>;
+export type TaskGrouping = (typeof TASK_GROUPINGS)[number];
 export type UpdateTaskInput = z.infer<typeof updateTaskSchema>;
 export type ListTasksQuery = z.infer<typeof listTasksQuerySchema>;

@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { NotificationSettings, UpdateNotificationSettings } from '@linkloom/shared';
+import { apiFetch } from '../../../lib/api-client.js';
+import { notificationSettingsQueryKey } from './get-notification-settings.js';
+
+/** Sends only what changed; the server answers with the whole stored state. */
+export function updateNotificationSettings(patch: UpdateNotificationSettings): Promise<NotificationSettings> {
+  return apiFetch<NotificationSettings>('/me/notifications', { method: 'PATCH', body: patch });
+}
+
+export function useUpdateNotificationSettings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateNotificationSettings,
+    // Quick successive switches must reach the server in the order they were made.
+    scope: { id: 'me-notifications' },
+    onSuccess: (saved) => queryClient.setQueryData(notificationSettingsQueryKey(), saved),
+  });
+}
