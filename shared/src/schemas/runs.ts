@@ -1,38 +1,63 @@
-/** Counts of every finding of one run (the `counts` of a run in the HTTP contract). */
-export interface RunCounts {
-  pages: number;
-  links: number;
-  internalLinks: number;
-  externalLinks: number;
-  brokenLinks: number;
-  brokenAnchors: number;
-  brokenAssets: number;
-  unsafeLinks: number;
-  ambiguousLinks: number;
-  redirectedLinks: number;
-  outOfScopeLinks: number;
-  orphans: number;
-  deadEnds: number;
-  unreachable: number;
-  deepPages: number;
-  islands: number;
-}
+import { z } from 'zod';
+import { isoDateTime, listOf, named, recordId } from './contract.js';
+import { docSetSettingsValueSchema } from './doc-set-settings.js';
 
-/** A page of a run as the page list and the page detail return it. */
-export interface RunPageItem {
-  path: string;
-  title: string;
-  stationaryScore: number;
-  timesAverage: number;
-  rank: number;
-  inboundCount: number;
-  outboundCount: number;
-  depth: number | null;
-  reachable: boolean;
-  orphan: boolean;
-  deadEnd: boolean;
-  deep: boolean;
-  island: boolean;
-  brokenLinkCount: number;
-  wordCount: number;
-}
+const count = z.int().nonnegative();
+
+/** Counts of every finding of one run (the `counts` of a run, docs/api.md "Runs"). */
+export const runCountsSchema = named(
+  'RunCounts',
+  z.object({
+    pages: count,
+    links: count,
+    internalLinks: count,
+    externalLinks: count,
+    brokenLinks: count,
+    brokenAnchors: count,
+    brokenAssets: count,
+    unsafeLinks: count,
+    ambiguousLinks: count,
+    redirectedLinks: count,
+    outOfScopeLinks: count,
+    orphans: count,
+    deadEnds: count,
+    unreachable: count,
+    deepPages: count,
+    islands: count,
+  }),
+);
+export type RunCounts = z.infer<typeof runCountsSchema>;
+
+export const RUN_STATUSES = ['queued', 'running', 'finished', 'failed'] as const;
+export const RUN_TRIGGERS = ['import', 'manual', 'nightly'] as const;
+
+/** One analysis of a snapshot with the settings it used; `counts` once it has finished. */
+export const runSchema = named(
+  'Run',
+  z.object({
+    id: recordId,
+    docSetId: recordId,
+    snapshotId: recordId,
+    status: z.enum(RUN_STATUSES),
+    trigger: z.enum(RUN_TRIGGERS),
+    settings: docSetSettingsValueSchema,
+    createdAt: isoDateTime,
+    startedAt: isoDateTime.nullable(),
+    finishedAt: isoDateTime.nullable(),
+    iterations: z.int().nonnegative().nullable(),
+    residual: z.number().nonnegative().nullable(),
+    durationMs: z.int().nonnegative().nullable(),
+    counts: runCountsSchema.nullable(),
+    /** Things a reader should know about how the run was made (e.g. no entry page found). */
+    warnings: z.array(z.object({ code: z.string(), message: z.string() })),
+    error: z.string().nullable(),
+    createdBy: recordId.nullable(),
+  }),
+);
+export const runListSchema = listOf('RunList', runSchema);
+/** The answer to starting a run: queued (202), it goes on in the background. */
+export const runAcceptedSchema = named('RunAccepted', z.object({ run: runSchema }));
+
+export type Run = z.infer<typeof runSchema>;
+export type RunStatus = Run['status'];
+export type RunTrigger = Run['trigger'];

@@ -1,4 +1,8 @@
-/** Fix tasks and the pruning list as the HTTP contract carries them (API.md "Work"). */
+import { z } from 'zod';
+import { isoDateTime, listOf, named, pagedShape, recordId } from './contract.js';
+import { roleSchema } from './roles.js';
+
+/** Fix tasks and the pruning list as the HTTP contract carries them (docs/api.md "Work"). */
 export const TASK_KINDS = [
   'add-inbound-links',
   'repair-broken-links',
@@ -14,58 +18,115 @@ export type TaskStatus = (typeof TASK_STATUSES)[number];
 export type TaskPriority = (typeof TASK_PRIORITIES)[number];
 
 /** What a task was made from: the broken hrefs with lines, or the suggested source pages with their gain. */
-export interface TaskFinding {
-  brokenLinks?: { href: string; line: number; status: string }[];
-  suggestedSources?: { path: string; title: string; scoreGain: number }[];
-  flags?: string[];
-}
+export const taskFindingSchema = z.object({
+  brokenLinks: z.array(z.object({ href: z.string(), line: z.int().nonnegative(), status: z.string() })).optional(),
+  suggestedSources: z.array(z.object({ path: z.string(), title: z.string(), scoreGain: z.number() })).optional(),
+  flags: z.array(z.string()).optional(),
+});
+export type TaskFinding = z.infer<typeof taskFindingSchema>;
 
-export interface TaskItem {
-  id: string;
-  docSetId: string;
-  docSetName: string | null;
-  pagePath: string;
-  kind: TaskKind;
-  title: string;
-  details: string;
-  finding: TaskFinding;
-  assignee: { id: string; name: string; email: string } | null;
-  priority: TaskPriority;
-  dueDate: string | null;
-  overdue: boolean;
-  status: TaskStatus;
-  verification: 'verified' | 'flagged' | null;
-  verifiedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+export const taskItemSchema = named(
+  'Task',
+  z.object({
+    id: recordId,
+    docSetId: recordId,
+    docSetName: z.string().nullable(),
+    pagePath: z.string(),
+    kind: z.enum(TASK_KINDS),
+    title: z.string(),
+    details: z.string(),
+    finding: taskFindingSchema,
+    assignee: z.object({ id: recordId, name: z.string(), email: z.string() }).nullable(),
+    priority: z.enum(TASK_PRIORITIES),
+    /** A calendar day, `YYYY-MM-DD`. */
+    dueDate: z.iso.date().nullable(),
+    overdue: z.boolean(),
+    status: z.enum(TASK_STATUSES),
+    /** Set by later runs: `verified` when the finding is gone, `flagged` when done but still there. */
+    verification: z.enum(['verified', 'flagged']).nullable(),
+    verifiedAt: isoDateTime.nullable(),
+    createdAt: isoDateTime,
+    updatedAt: isoDateTime,
+  }),
+);
+export type TaskItem = z.infer<typeof taskItemSchema>;
 
-export interface TaskEventItem {
-  id: string;
-  type: 'comment' | 'change';
-  actor: { id: string | null; name: string };
-  body: string;
-  changes: Record<string, { from: unknown; to: unknown }>;
-  at: string;
-}
+export const taskEventSchema = named(
+  'TaskEvent',
+  z.object({
+    id: recordId,
+    type: z.enum(['comment', 'change']),
+    actor: z.object({ id: recordId.nullable(), name: z.string() }),
+    body: z.string(),
+    changes: z.record(z.string(), z.object({ from: z.unknown(), to: z.unknown() })),
+    at: isoDateTime,
+  }),
+);
+export type TaskEventItem = z.infer<typeof taskEventSchema>;
 
-export type PruningDecision = 'approve' | 'reject' | 'keep';
+export const taskDetailSchema = named('TaskDetail', taskItemSchema.extend({ events: z.array(taskEventSchema) }));
+export type TaskDetail = z.infer<typeof taskDetailSchema>;
+export const taskListSchema = listOf('TaskList', taskItemSchema);
+/** The tasks made by one bulk request, one per page. */
+export const taskBatchSchema = named('TaskBatch', z.object({ items: z.array(taskItemSchema) }));
 
-export interface PruningReason {
-  rule: 'orphan' | 'unreachable' | 'low-score' | 'stale' | 'thin' | 'nominated';
-  detail: string;
-}
+export const assigneeSchema = named('Assignee', z.object({ id: recordId, name: z.string(), email: z.string(), role: roleSchema }));
+export const assigneeListSchema = listOf('AssigneeList', assigneeSchema);
+export type Assignee = z.infer<typeof assigneeSchema>;
 
-export interface PruningItem {
-  path: string;
-  title: string;
-  reasons: PruningReason[];
-  inLatestRun: boolean;
-  inboundCount: number | null;
-  stationaryScore: number | null;
-  wordCount: number | null;
-  reviewedAt: string | null;
-  firstProposedAt: string;
-  nominations: { by: string; reason: string; at: string }[];
-  decision: null | { decision: PruningDecision; note: string; by: string; at: string; flagged: boolean; flagReason: string | null };
-}
+export const PRUNING_DECISIONS = ['approve', 'reject', 'keep'] as const;
+export type PruningDecision = (typeof PRUNING_DECISIONS)[number];
+export const PRUNING_RULES = ['orphan', 'unreachable', 'low-score', 'stale', 'thin', 'nominated'] as const;
+
+export const pruningReasonSchema = z.object({ rule: z.enum(PRUNING_RULES), detail: z.string() });
+export type PruningReason = z.infer<typeof pruningReasonSchema>;
+
+export const pruningItemSchema = named(
+  'PruningItem',
+  z.object({
+    path: z.string(),
+    title: z.string(),
+    reasons: z.array(pruningReasonSchema),
+    inLatestRun: z.boolean(),
+    inboundCount: z.int().nonnegative().nullable(),
+    stationaryScore: z.number().nonnegative().nullable(),
+    wordCount: z.int().nonnegative().nullable(),
+    /** As the page's front matter gives it (usually `YYYY-MM-DD`). */
+    reviewedAt: z.string().nullable(),
+    firstProposedAt: isoDateTime,
+    nominations: z.array(z.object({ by: z.string(), reason: z.string(), at: isoDateTime })),
+    decision: z
+      .object({
+        decision: z.enum(PRUNING_DECISIONS),
+        note: z.string(),
+        by: z.string(),
+        at: isoDateTime,
+        flagged: z.boolean(),
+        flagReason: z.string().nullable(),
+      })
+      .nullable(),
+  }),
+);
+export type PruningItem = z.infer<typeof pruningItemSchema>;
+
+export const pruningListSchema = named(
+  'PruningList',
+  z.object({
+    ...pagedShape(pruningItemSchema),
+    /** Send it back with decisions: a newer list answers 409 instead of overwriting what others decided. */
+    version: z.int().nonnegative(),
+    runId: recordId.nullable(),
+    rules: z.object({
+      lowScorePercentile: z.number(),
+      staleDays: z.int(),
+      thinWordCount: z.int(),
+      protectGlobs: z.array(z.string()),
+    }),
+  }),
+);
+export type PruningList = z.infer<typeof pruningListSchema>;
+
+export const pruningDecisionsResultSchema = named(
+  'PruningDecisionsResult',
+  z.object({ version: z.int().nonnegative(), decided: z.int().nonnegative() }),
+);

@@ -14,6 +14,8 @@ import {
   updateTaskSchema,
 } from './task.schemas.js';
 import { TasksService } from './tasks.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { assigneeListSchema, taskBatchSchema, taskDetailSchema, taskEventSchema, taskItemSchema, taskListSchema } from '@linkloom/shared';
 
 @ApiTags('tasks')
 @ApiBearerAuth()
@@ -23,12 +25,14 @@ export class TasksController {
 
   @Get()
   @ApiZodQuery(listTasksQuerySchema)
+  @ApiZodResponse(taskListSchema)
   list(@CurrentUser() actor: AuthUser, @Query(new ZodPipe(listTasksQuerySchema)) query: ListTasksQuery) {
     return this.tasks.list(actor, query);
   }
 
   @Get('assignees')
   @MinRole('editor')
+  @ApiZodResponse(assigneeListSchema)
   assignees() {
     return this.tasks.assignees().then((items) => ({ items, total: items.length, page: 1, pageSize: items.length }));
   }
@@ -36,6 +40,7 @@ export class TasksController {
   @Post()
   @MinRole('editor')
   @ApiZodBody(createTaskSchema)
+  @ApiZodResponse(taskItemSchema, { status: 201 })
   create(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(createTaskSchema)) body: CreateTaskInput) {
     return this.tasks.create(actor, body);
   }
@@ -43,11 +48,13 @@ export class TasksController {
   @Post('bulk')
   @MinRole('editor')
   @ApiZodBody(bulkCreateTasksSchema)
+  @ApiZodResponse(taskBatchSchema, { status: 201 })
   bulkCreate(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(bulkCreateTasksSchema)) body: BulkCreateTasksInput) {
     return this.tasks.bulkCreate(actor, body);
   }
 
   @Get(':taskId')
+  @ApiZodResponse(taskDetailSchema)
   get(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string) {
     return this.tasks.get(actor, id);
   }
@@ -55,6 +62,7 @@ export class TasksController {
   @Patch(':taskId')
   @MinRole('writer')
   @ApiZodBody(updateTaskSchema)
+  @ApiZodResponse(taskItemSchema)
   update(
     @CurrentUser() actor: AuthUser,
     @Param('taskId', ParseUUIDPipe) id: string,
@@ -66,6 +74,7 @@ export class TasksController {
   @Post(':taskId/comments')
   @MinRole('writer')
   @ApiZodBody(commentSchema)
+  @ApiZodResponse(taskEventSchema, { status: 201 })
   comment(
     @CurrentUser() actor: AuthUser,
     @Param('taskId', ParseUUIDPipe) id: string,
