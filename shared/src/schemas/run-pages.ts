@@ -41,7 +41,8 @@ export const pageBrokenLinkSchema = z.object({
   href: z.string(),
   targetPath: z.string().nullable(),
   anchor: z.string().nullable(),
-  status: z.string(),
+  /** Only the two broken kinds are listed here; the links list has every status. */
+  status: z.enum(['broken', 'broken-anchor']),
   reason: z.string().nullable(),
 });
 
@@ -91,3 +92,19 @@ export type SuggestedSource = z.infer<typeof suggestedSourceSchema>;
 export type Neighbourhood = z.infer<typeof neighbourhoodSchema>;
 export type NeighbourNode = Neighbourhood['nodes'][number];
 export type ScorePoint = PageDetail['scoreHistory'][number];
+export type RunPageList = z.infer<typeof runPageListSchema>;
+
+/** Finding flags a page can carry, in the words the API uses (`flags=` of the page list, `flags` of nodes). */
+export const PAGE_FLAGS = ['orphan', 'dead-end', 'unreachable', 'deep', 'island'] as const;
+export type PageFlag = (typeof PAGE_FLAGS)[number];
+
+/** The flags of a page, in `PAGE_FLAGS` order. */
+export function pageFlags(page: Pick<RunPageItem, 'orphan' | 'deadEnd' | 'reachable' | 'deep' | 'island'>): PageFlag[] {
+  const flags: PageFlag[] = [];
+  if (page.orphan) flags.push('orphan');
+  if (page.deadEnd) flags.push('dead-end');
+  if (!page.reachable) flags.push('unreachable');
+  if (page.deep) flags.push('deep');
+  if (page.island) flags.push('island');
+  return flags;
+}

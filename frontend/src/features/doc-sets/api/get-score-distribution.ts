@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { scoreDistributionSchema, type ScoreDistribution } from '@linkloom/shared';
 import { ApiError, apiFetch } from '../../../lib/api-client.js';
-import type { ScoreDistribution } from '../../../types/api.js';
 import { docSetQueryKey } from './get-doc-set.js';
 
 /**
@@ -8,8 +8,9 @@ import { docSetQueryKey } from './get-doc-set.js';
  */
 export async function getScoreDistribution(docSetId: string, runId: string, signal?: AbortSignal): Promise<ScoreDistribution | null> {
   try {
-    return await apiFetch<ScoreDistribution>(
+    return await apiFetch(
       `/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/score-distribution`,
+      scoreDistributionSchema,
       { signal },
     );
   } catch (error) {

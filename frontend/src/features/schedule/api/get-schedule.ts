@@ -1,33 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { scheduleStatusSchema, type ScheduleStatus } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-
-/** One doc set's part in the last nightly job (backend NightlyOutcome). */
-export interface NightlyDocSetResult {
-  docSetId: string;
-  name: string;
-  action: 're-read folder' | 're-analysed';
-  outcome: 'finished' | 'failed';
-  runId?: string;
-  message?: string;
-}
-
-export interface NightlyResult {
-  trigger?: 'clock' | 'run-now' | 'catch-up';
-  status: 'finished' | 'skipped';
-  reason?: string;
-  docSets: NightlyDocSetResult[];
-}
-
-export interface ScheduleStatus {
-  nightlyTime: string;
-  timeZone: string;
-  nextRunAt: string;
-  running: boolean;
-  lastStartedAt: string | null;
-  lastFinishedAt: string | null;
-  lastResult: NightlyResult | null;
-  docSets: Array<{ id: string; name: string; nightly: boolean; sourceFolder: string | null }>;
-}
 
 /** While the job runs the screen asks again this often; a nightly job takes minutes, so 3 s is plenty. */
 export const RUNNING_POLL_MS = 3_000;
@@ -35,7 +8,7 @@ export const RUNNING_POLL_MS = 3_000;
 export const scheduleQueryKey = () => ['schedule'] as const;
 
 export function getSchedule(signal?: AbortSignal): Promise<ScheduleStatus> {
-  return apiFetch<ScheduleStatus>('/schedule', { signal });
+  return apiFetch('/schedule', scheduleStatusSchema, { signal });
 }
 
 /** A "Run now" the server accepted: when, and the `lastStartedAt` seen before it. */

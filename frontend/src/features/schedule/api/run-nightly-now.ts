@@ -1,15 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { runNowResultSchema, type RunNowResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { scheduleQueryKey } from './get-schedule.js';
 
-export interface RunNowResult {
-  started: boolean;
-  /** Why the job was not started, in a sentence from the server. */
-  reason?: string;
-}
-
 export function runNightlyNow(): Promise<RunNowResult> {
-  return apiFetch<RunNowResult>('/schedule/run-now', { method: 'POST' });
+  return apiFetch('/schedule/run-now', runNowResultSchema, { method: 'POST' });
 }
 
 export function useRunNightlyNow() {

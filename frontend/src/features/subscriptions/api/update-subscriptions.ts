@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { subscriptionsSchema, type Subscription, type Subscriptions } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import { subscriptionsQueryKey, type Subscription, type Subscriptions } from './get-subscriptions.js';
+import { subscriptionsQueryKey } from './get-subscriptions.js';
 
 /** Replaces all of the user's choices; the server answers with the stored state. */
 export function updateSubscriptions(subscriptions: Subscription[]): Promise<Subscriptions> {
-  return apiFetch<Subscriptions>('/me/subscriptions', { method: 'PUT', body: { subscriptions } });
+  return apiFetch('/me/subscriptions', subscriptionsSchema, { method: 'PUT', body: { subscriptions } });
 }
 
 export function useUpdateSubscriptions() {

@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { docSet, pagedList, signInAs } from '../../../testing/fixtures.js';
 import { SubscriptionsSection } from './subscriptions-section.js';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -21,17 +21,7 @@ function api() {
       stored = (JSON.parse(String(init?.body)) as { subscriptions: typeof stored }).subscriptions;
       return { body: { subscriptions: stored } };
     },
-    'GET /api/doc-sets': () => ({
-      body: {
-        items: [
-          { id: HARBOUR, name: 'Harbour guides' },
-          { id: FERRY, name: 'Ferry manuals' },
-        ],
-        total: 2,
-        page: 1,
-        pageSize: 500,
-      },
-    }),
+    'GET /api/doc-sets': () => ({ body: pagedList([docSet(HARBOUR, 'Harbour guides'), docSet(FERRY, 'Ferry manuals')]) }),
   });
 }
 

@@ -3,7 +3,8 @@ import { EmptyState } from '../../../components/ui/empty-state.js';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import { useDocSets } from '../../doc-sets/api/get-doc-sets.js';
-import { useSubscriptions, type Subscription } from '../api/get-subscriptions.js';
+import type { Subscription } from '@linkloom/shared';
+import { useSubscriptions } from '../api/get-subscriptions.js';
 import { useUpdateSubscriptions } from '../api/update-subscriptions.js';
 
 /** Turning the digest off also clears "when nothing changed", which only means something with a digest. */

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { taskBatchSchema, type TaskItem, type TaskKind, type TaskPriority } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TaskKind } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export interface CreateTasksInput {
@@ -10,13 +10,13 @@ export interface CreateTasksInput {
   title?: string;
   details?: string;
   assigneeId?: string | null;
-  priority?: Priority;
+  priority?: TaskPriority;
   dueDate?: string | null;
 }
 
 /** POST /api/tasks/bulk: one task per page, details prefilled by the server from the latest run. */
-export function createTasks(input: CreateTasksInput): Promise<{ items: Task[] }> {
-  return apiFetch<{ items: Task[] }>('/tasks/bulk', { method: 'POST', body: input });
+export function createTasks(input: CreateTasksInput): Promise<{ items: TaskItem[] }> {
+  return apiFetch('/tasks/bulk', taskBatchSchema, { method: 'POST', body: input });
 }
 
 export function useCreateTasks() {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { taskItemSchema, type TaskItem, type TaskPriority, type TaskStatus } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TaskStatus } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export interface UpdateTaskInput {
@@ -8,13 +8,13 @@ export interface UpdateTaskInput {
   title?: string;
   details?: string;
   assigneeId?: string | null;
-  priority?: Priority;
+  priority?: TaskPriority;
   dueDate?: string | null;
   status?: TaskStatus;
 }
 
-export function updateTask({ id, ...patch }: UpdateTaskInput): Promise<Task> {
-  return apiFetch<Task>(`/tasks/${encodeURIComponent(id)}`, { method: 'PATCH', body: patch });
+export function updateTask({ id, ...patch }: UpdateTaskInput): Promise<TaskItem> {
+  return apiFetch(`/tasks/${encodeURIComponent(id)}`, taskItemSchema, { method: 'PATCH', body: patch });
 }
 
 export function useUpdateTask() {

@@ -1,12 +1,13 @@
 import { useEffect, useState, type FormEvent } from 'react';
-import { useParams } from 'react-router-dom';
+import { TASK_KINDS, TASK_PRIORITIES, type TaskKind, type TaskPriority } from '@linkloom/shared';
+import { KIND_LABELS } from './task-labels.js';
+import { useParams } from 'react-router';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { useNotifier } from '../../../components/ui/notifier.js';
 import { errorMessage } from '../../../lib/api-client.js';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { useAssignees } from '../api/get-assignees.js';
 import { useCreateTasks } from '../api/create-tasks.js';
-import { KIND_LABELS, PRIORITIES, TASK_KINDS, type Priority, type TaskKind } from '../types.js';
 
 export interface TaskRequest {
   pagePaths: string[];
@@ -34,7 +35,7 @@ export function CreateTasksDialog({ request, onClose, docSetId }: Props) {
   const [kind, setKind] = useState<TaskKind>('other');
   const [title, setTitle] = useState('');
   const [assigneeId, setAssigneeId] = useState(OWNER);
-  const [priority, setPriority] = useState<Priority>('normal');
+  const [priority, setPriority] = useState<TaskPriority>('normal');
   const [dueDate, setDueDate] = useState('');
   const [details, setDetails] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
@@ -118,10 +119,10 @@ export function CreateTasksDialog({ request, onClose, docSetId }: Props) {
                 select
                 label="Priority"
                 value={priority}
-                onChange={(e) => setPriority(e.target.value as Priority)}
+                onChange={(e) => setPriority(e.target.value as TaskPriority)}
                 sx={{ flex: 1 }}
               >
-                {PRIORITIES.map((p) => (
+                {TASK_PRIORITIES.map((p) => (
                   <MenuItem key={p} value={p}>
                     {p}
                   </MenuItem>

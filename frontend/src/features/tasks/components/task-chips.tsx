@@ -1,10 +1,11 @@
 import { Chip, Stack, Tooltip } from '@mui/material';
-import { STATUS_LABELS, type Task } from '../types.js';
+import type { TaskItem } from '@linkloom/shared';
+import { STATUS_LABELS } from './task-labels.js';
 
 const STATUS_COLOUR = { open: 'default', 'in-progress': 'info', done: 'success', 'wont-fix': 'default' } as const;
 
 /** Status plus what the latest run said about it (verified / flagged) and whether it is overdue. */
-export function TaskStatusChips({ task }: { task: Pick<Task, 'status' | 'verification' | 'overdue'> }) {
+export function TaskStatusChips({ task }: { task: Pick<TaskItem, 'status' | 'verification' | 'overdue'> }) {
   return (
     <Stack direction="row" spacing={0.5}>
       <Chip

@@ -1,19 +1,4 @@
-// Shapes of the tasks API (API.md "Work"), as GET/POST /api/tasks answer them.
-import {
-  TASK_KINDS,
-  TASK_PRIORITIES,
-  TASK_STATUSES,
-  type TaskEventItem,
-  type TaskItem,
-  type TaskKind,
-  type TaskPriority,
-  type TaskStatus,
-} from '@linkloom/shared';
-
-export { TASK_KINDS, TASK_STATUSES };
-export type { TaskKind, TaskStatus };
-export const PRIORITIES = TASK_PRIORITIES;
-export type Priority = TaskPriority;
+import type { TaskKind, TaskStatus } from '@linkloom/shared';
 
 export const KIND_LABELS: Record<TaskKind, string> = {
   'add-inbound-links': 'Add inbound links',
@@ -31,20 +16,7 @@ export const STATUS_LABELS: Record<TaskStatus, string> = {
   'wont-fix': 'Won’t fix',
 };
 
-export type Task = TaskItem;
-export type TaskEvent = TaskEventItem;
-
-export interface TaskDetail extends Task {
-  events: TaskEvent[];
-}
-
-export interface Assignee {
-  id: string;
-  name: string;
-  email: string;
-  role: string;
-}
-
+/** The task list's filters and paging, as kept in the URL. */
 export interface TaskFilters {
   assignee?: string;
   status?: string[];
