@@ -4,9 +4,9 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import yazl from 'yazl';
 import { launchBrowser, screenshot, signIn } from './support/browser.js';
 import { type RunningServer, startServer } from './support/server.js';
+import { zipOf as zip } from './support/zip.js';
 
 const EDITOR = 'editor@demo.linkloom.test';
 const WRITER = 'writer@demo.linkloom.test';
@@ -38,19 +38,6 @@ async function waitFor(check: () => Promise<boolean>, timeoutMs: number, what: s
     await new Promise((r) => setTimeout(r, 500));
   }
   throw new Error(`Timed out waiting for ${what}`);
-}
-
-function zip(files: Record<string, string>): Promise<Buffer> {
-  const archive = new yazl.ZipFile();
-  for (const [name, text] of Object.entries(files)) archive.addBuffer(Buffer.from(text), name);
-  archive.end();
-  const chunks: Buffer[] = [];
-  return new Promise((resolve, reject) => {
-    archive.outputStream
-      .on('data', (c: Buffer) => chunks.push(c))
-      .on('end', () => resolve(Buffer.concat(chunks)))
-      .on('error', reject);
-  });
 }
 
 describe('work on findings: tasks and the pruning list', () => {

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { islandListSchema, type Island } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 /** Islands are few (each is a group of pages), so one page of the largest size holds them all. */
 export async function getIslands(docSetId: string, runId: string, signal?: AbortSignal): Promise<Island[]> {

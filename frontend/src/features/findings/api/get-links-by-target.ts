@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { linkTargetGroupListSchema, type LinkTargetGroup, type ListResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 import { linksQueryParams, type LinksQuery } from './get-links.js';
 
 /** The same links, one row per missing target with the pages that point at it. */

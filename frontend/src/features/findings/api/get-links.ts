@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { linkListSchema, type LinkItem, type LinkStatus, type ListResult } from '@linkloom/shared';
 import { apiFetch, type Query } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 /** The links route filters by status and pages; it has no sort keys (links come in page, line order). */
 export interface LinksQuery {

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { linkMapSchema, type LinkMap } from '@linkloom/shared';
 import { apiFetch, ApiError } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export interface GraphQuery {
   folder: string;

@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { runPageListSchema, type PageFlag, type RunPageList } from '@linkloom/shared';
 import { apiFetch, type Query } from '../../../lib/api-client.js';
 import { runQueryKey } from './get-run.js';
-import { runPath } from './run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export interface PagesQuery {
   page: number;

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { runSchema, type Run } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { docSetQueryKey } from '../../doc-sets/api/get-doc-set.js';
-import { runPath } from './run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 /** Key prefix of everything read from one run; `latest` is its own key, as the server resolves it. */
 export const runQueryKey = (docSetId: string, runId: string) => [...docSetQueryKey(docSetId), 'run', runId] as const;
