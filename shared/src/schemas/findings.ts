@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { listOf, named, pagedShape, recordId } from './contract.js';
 
-/** How a link resolved (docs/link-rules.md); the links list filters by it with `status=`. */
+/** How a link resolved (docs/api.md "Runs"); the links list filters by it with `status=`. */
 export const LINK_STATUSES = ['broken', 'broken-anchor', 'unsafe', 'ambiguous', 'redirected', 'out-of-scope', 'external', 'ok'] as const;
 export const linkStatusSchema = z.enum(LINK_STATUSES);
 export type LinkStatus = z.infer<typeof linkStatusSchema>;

@@ -1,5 +1,4 @@
-// The tasks API contract (zod), checked by ZodPipe. Kept beside the module because shared/ is owned by others;
-// the front end mirrors the types in features/tasks/types.ts.
+// The tasks API's request shapes (zod), checked by ZodPipe; the answers' shapes are in shared/src/schemas/work.ts.
 import { listQuerySchema } from '@linkloom/shared';
 import { z } from 'zod';
 import { TASK_KINDS, TASK_STATUSES } from '../../db/schema/work.js';
