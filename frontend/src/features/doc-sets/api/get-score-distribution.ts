@@ -3,9 +3,7 @@ import { scoreDistributionSchema, type ScoreDistribution } from '@linkloom/share
 import { ApiError, apiFetch } from '../../../lib/api-client.js';
 import { docSetQueryKey } from './get-doc-set.js';
 
-/**
- * `null` when the back end has no such route yet (404/501): the overview then simply leaves the chart out.
- */
+/** `null` when the server has no distribution for the run (404): the overview then simply leaves the chart out. */
 export async function getScoreDistribution(docSetId: string, runId: string, signal?: AbortSignal): Promise<ScoreDistribution | null> {
   try {
     return await apiFetch(
