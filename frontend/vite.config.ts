@@ -13,7 +13,7 @@ const vendorGroups: Array<{ name: string; test: RegExp; priority: number }> = [
   },
   {
     name: 'react',
-    test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|cookie|set-cookie-parser)[\\/]/,
+    test: /node_modules[\\/](react|react-dom|scheduler|react-router|cookie|set-cookie-parser)[\\/]/,
     priority: 20,
   },
 ];

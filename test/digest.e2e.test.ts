@@ -6,7 +6,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn } from './support/browser.js';
-import { type Client, signedInClient, waitFor, zipOf } from './support/http.js';
+import { type Client, signedInClient, waitFor } from './support/http.js';
+import { zipOf } from './support/zip.js';
 import { type RunningServer, startServer } from './support/server.js';
 
 const ADMIN = 'admin@demo.linkloom.test';

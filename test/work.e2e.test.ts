@@ -5,8 +5,9 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn } from './support/browser.js';
-import { waitFor, zipOf as zip } from './support/http.js';
+import { waitFor } from './support/http.js';
 import { type RunningServer, startServer } from './support/server.js';
+import { zipOf as zip } from './support/zip.js';
 
 const EDITOR = 'editor@demo.linkloom.test';
 const WRITER = 'writer@demo.linkloom.test';
@@ -135,7 +136,12 @@ describe('work on findings: tasks and the pruning list', () => {
     expect((await api(`/tasks/${cranes.id}`)).body.status).toBe('verified');
     await writer.goto(`${server.url}/tasks?status=verified&task=${cranes.id}`);
     await writer.getByText(/no longer finds this: fixed and verified\./).waitFor({ timeout: 15_000 });
-    expect(await writer.getByText(/^Fixed and verified by run \d+$/).first().isVisible()).toBe(true);
+    expect(
+      await writer
+        .getByText(/^Fixed and verified by run \d+$/)
+        .first()
+        .isVisible(),
+    ).toBe(true);
     await screenshot(writer, 'work-task-verified');
     // The old-ferry task's orphan finding is still there, so it stays open.
     const ferry = tasks.find((t) => t.pagePath === 'guide/old-ferry.md')!;

@@ -1,7 +1,8 @@
 import { type DynamicModule, Module } from '@nestjs/common';
-import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR } from '@nestjs/core';
 import { ScheduleModule } from '@nestjs/schedule';
 import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
+import { ResponseContractInterceptor } from './common/api-contract/response-contract.interceptor.js';
 import { AllExceptionsFilter } from './common/exception.filter.js';
 import { AuthGuard } from './common/auth.guard.js';
 import { DomainEventsModule } from './common/events/domain-events.js';
@@ -41,6 +42,8 @@ export class AppModule {
         { provide: APP_GUARD, useClass: ThrottlerGuard },
         { provide: APP_GUARD, useClass: AuthGuard },
         { provide: APP_FILTER, useClass: AllExceptionsFilter },
+        // Not registered at all in production, so the check costs nothing there.
+        ...(config.checkResponses ? [{ provide: APP_INTERCEPTOR, useClass: ResponseContractInterceptor }] : []),
       ],
       exports: [APP_CONFIG],
     };

@@ -2,12 +2,12 @@ import type { INestApplication } from '@nestjs/common';
 import { ConsoleLogger, Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AppModule } from './app.module.js';
+import { mountApiDocs } from './common/api-contract/api-document.js';
 import { toErrorBody } from './common/exception.filter.js';
 import { LifecycleService } from './common/lifecycle/lifecycle.service.js';
 import { requestContext } from './common/lifecycle/request-context.middleware.js';
@@ -52,19 +52,6 @@ export async function createApp(config: AppConfig, options: { logger?: false } =
   app.use(expressErrorHandler());
   await app.init();
   return app;
-}
-
-function mountApiDocs(app: INestApplication): void {
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Linkloom API')
-      .setDescription('Doc sets, imports, analysis runs, findings, work and mail. Send `Authorization: Bearer <token>`.')
-      .setVersion('1')
-      .addBearerAuth()
-      .build(),
-  );
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
 }
 
 /** Serves the built front end on the same port; unknown non-API paths get index.html (client-side routes). */

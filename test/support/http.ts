@@ -1,7 +1,5 @@
-// Helpers for end-to-end tests that drive a running Linkloom over HTTP: a signed-in client, zips of Markdown
-// made in memory, and waiting for the background work (imports, runs, the nightly job) to finish.
-import yazl from 'yazl';
-
+// Helpers for end-to-end tests that drive a running Linkloom over HTTP: a signed-in client, and waiting for the
+// background work (imports, runs, the nightly job) to finish. Zips of Markdown come from zip.ts.
 export interface ApiAnswer {
   status: number;
   body: any; // eslint-disable-line @typescript-eslint/no-explicit-any -- each test reads the fields it checks
@@ -16,19 +14,6 @@ export async function waitFor(check: () => Promise<boolean>, timeoutMs: number, 
     await new Promise((r) => setTimeout(r, 500));
   }
   throw new Error(`Timed out waiting for ${what}`);
-}
-
-export function zipOf(files: Record<string, string>): Promise<Buffer> {
-  const archive = new yazl.ZipFile();
-  for (const [name, text] of Object.entries(files)) archive.addBuffer(Buffer.from(text), name);
-  archive.end();
-  const chunks: Buffer[] = [];
-  return new Promise((resolve, reject) => {
-    archive.outputStream
-      .on('data', (c: Buffer) => chunks.push(c))
-      .on('end', () => resolve(Buffer.concat(chunks)))
-      .on('error', reject);
-  });
 }
 
 /** A client signed in as a demo user; JSON bodies are sent as JSON, anything else as it is. */

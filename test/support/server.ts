@@ -2,10 +2,11 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-const root = fileURLToPath(new URL('../..', import.meta.url));
+// From the file path, not `new URL(..., import.meta.url)`, so it also works under jsdom, whose `URL` is the page's.
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 
 export interface RunningServer {
   url: string;

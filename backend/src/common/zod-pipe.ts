@@ -1,7 +1,8 @@
 import { applyDecorators, type PipeTransform } from '@nestjs/common';
 import { ApiBody, ApiQuery } from '@nestjs/swagger';
-import { z, type ZodType } from 'zod';
+import type { ZodType } from 'zod';
 import { AppError } from './app-error.js';
+import { inputJsonSchema } from './api-contract/openapi-schema.js';
 
 /** Validates (and coerces) a body or query against a shared zod contract; unknown keys fail when the schema is strict. */
 export class ZodPipe<T> implements PipeTransform<unknown, T> {
@@ -17,20 +18,13 @@ export class ZodPipe<T> implements PipeTransform<unknown, T> {
   }
 }
 
-function jsonSchema(schema: ZodType): Record<string, unknown> {
-  try {
-    const { $schema: _ignored, ...rest } = z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' }) as Record<string, unknown>;
-    return rest;
-  } catch {
-    return { type: 'object' };
-  }
-}
-
 /** Documents a zod body in OpenAPI. */
-export const ApiZodBody = (schema: ZodType): MethodDecorator => applyDecorators(ApiBody({ schema: jsonSchema(schema) as never }));
+export const ApiZodBody = (schema: ZodType): MethodDecorator => applyDecorators(ApiBody({ schema: inputJsonSchema(schema) as never }));
 
-/** Documents each top-level field of a zod object as a query parameter in OpenAPI. */
+/** Documents each top-level field of a zod object as a query parameter in OpenAPI, required unless optional or defaulted. */
 export function ApiZodQuery(schema: ZodType): MethodDecorator {
-  const shape = (jsonSchema(schema).properties ?? {}) as Record<string, Record<string, unknown>>;
-  return applyDecorators(...Object.entries(shape).map(([name, s]) => ApiQuery({ name, required: false, schema: s as never })));
+  const { properties = {}, required = [] } = inputJsonSchema(schema) as { properties?: Record<string, object>; required?: string[] };
+  return applyDecorators(
+    ...Object.entries(properties).map(([name, s]) => ApiQuery({ name, required: required.includes(name), schema: s as never })),
+  );
 }

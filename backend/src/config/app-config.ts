@@ -39,6 +39,8 @@ export interface AppConfig {
   /** How often the outbox sender looks for due messages. */
   mailPollMs: number;
   backupsKept: number;
+  /** Check every answer against its route's response schema (docs/api.md); on unless NODE_ENV is production. */
+  checkResponses: boolean;
 }
 
 const PLACEHOLDER_SECRETS = new Set(['changeme', 'secret', 'change-me-to-a-long-random-string']);
@@ -124,6 +126,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     mailboxPort: int(env, 'MAILBOX_PORT', 0, problems, 0, 65535),
     mailPollMs: int(env, 'MAIL_POLL_MS', 5000, problems, 50),
     backupsKept: int(env, 'BACKUPS_KEPT', 7, problems, 1, 365),
+    checkResponses: bool(env, 'CHECK_RESPONSES', env.NODE_ENV !== 'production', problems),
     ...overrides,
   };
   if (problems.length) throw new ConfigError(problems);

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Navigate, useLocation } from 'react-router-dom';
+import { Navigate, useLocation } from 'react-router';
 import type { Role } from '@linkloom/shared';
 import { useSession } from '../lib/session.js';
 import { useRoleAtLeast } from '../lib/use-role.js';

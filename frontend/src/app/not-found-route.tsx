@@ -1,4 +1,4 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Button } from '@mui/material';
 import { EmptyState } from '../components/ui/empty-state.js';
 

@@ -1,4 +1,4 @@
-import { isRouteErrorResponse, Link as RouterLink, useRouteError } from 'react-router-dom';
+import { isRouteErrorResponse, Link as RouterLink, useRouteError } from 'react-router';
 import { Box, Button, Stack } from '@mui/material';
 import { ErrorPanel } from '../components/ui/error-panel.js';
 

@@ -1,5 +1,5 @@
 import type { ComponentType } from 'react';
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, type RouteObject } from 'react-router';
 import { RequireRole, RequireSession } from './guards.js';
 import { AppShell } from './shell/app-shell.js';
 import { RouteErrorBoundary } from './route-error-boundary.js';

@@ -1,5 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { ApiError, apiFetch, apiUrl, setUnauthorizedHandler } from './api-client.js';
+import { docSetSchema, healthSchema, noContentSchema } from '@linkloom/shared';
+import { ApiError, apiFetch, apiUrl, errorMessage, setUnauthorizedHandler } from './api-client.js';
+import { docSet } from '../testing/fixtures.js';
 import { getSession, setSession } from './session.js';
 
 const session = {
@@ -20,11 +22,12 @@ describe('apiUrl', () => {
 });
 
 describe('apiFetch', () => {
-  it('sends the bearer token and JSON body, and parses JSON back', async () => {
+  it('sends the bearer token and JSON body, and parses JSON back with the route schema', async () => {
     setSession(session);
-    const fetchMock = vi.fn(async () => new Response(JSON.stringify({ ok: 1 }), { status: 200 }));
+    const created = docSet('d1', 'N');
+    const fetchMock = vi.fn(async () => new Response(JSON.stringify(created), { status: 201 }));
     vi.stubGlobal('fetch', fetchMock);
-    await expect(apiFetch('/doc-sets', { method: 'POST', body: { name: 'N' } })).resolves.toEqual({ ok: 1 });
+    await expect(apiFetch('/doc-sets', docSetSchema, { method: 'POST', body: { name: 'N' } })).resolves.toEqual(created);
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
     expect(url).toBe('/api/doc-sets');
     expect((init.headers as Record<string, string>).Authorization).toBe('Bearer tok-9');
@@ -39,7 +42,7 @@ describe('apiFetch', () => {
           status: 422,
         }),
     );
-    const error = await apiFetch('/x').catch((e: unknown) => e);
+    const error = await apiFetch('/x', healthSchema).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
     expect(error).toMatchObject({ status: 422, code: 'ARCHIVE_UNSAFE_PATH', message: 'Remove ../ paths', details: ['a'] });
   });
@@ -49,7 +52,7 @@ describe('apiFetch', () => {
     const redirect = vi.fn();
     setUnauthorizedHandler(redirect);
     vi.stubGlobal('fetch', async () => new Response('', { status: 401 }));
-    await expect(apiFetch('/doc-sets')).rejects.toMatchObject({ status: 401 });
+    await expect(apiFetch('/doc-sets', docSetSchema)).rejects.toMatchObject({ status: 401 });
     expect(getSession()).toBeNull();
     expect(redirect).toHaveBeenCalledOnce();
   });
@@ -58,6 +61,28 @@ describe('apiFetch', () => {
     vi.stubGlobal('fetch', async () => {
       throw new TypeError('Failed to fetch');
     });
-    await expect(apiFetch('/x')).rejects.toMatchObject({ status: 0, code: 'NETWORK' });
+    await expect(apiFetch('/x', healthSchema)).rejects.toMatchObject({ status: 0, code: 'NETWORK' });
+  });
+
+  it('fails in words, naming the field, when the answer has drifted from the schema', async () => {
+    // The islands list once printed "undefined pages": the server said `pageCount`, the screen read `size`.
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify({ status: 'ok', databaseKind: 'pglite', version: '1', demo: false })));
+    const error = await apiFetch('/health', healthSchema).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(ApiError);
+    expect(error).toMatchObject({ status: 200, code: 'RESPONSE_SHAPE' });
+    expect(errorMessage(error)).toMatch(/GET \/api\/health is not what this screen expects \(database: /);
+  });
+
+  it('drops fields the schema does not know, so a newer server does not break an older screen', async () => {
+    const sent = { status: 'ok', database: 'postgres', version: '2', demo: true, region: 'eu' };
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(sent)));
+    await expect(apiFetch('/health', healthSchema)).resolves.toEqual({ status: 'ok', database: 'postgres', version: '2', demo: true });
+  });
+
+  it('expects no body from a 204 route and refuses one that sends a body', async () => {
+    vi.stubGlobal('fetch', async () => new Response(null, { status: 204 }));
+    await expect(apiFetch('/auth/sign-out', noContentSchema, { method: 'POST' })).resolves.toBeUndefined();
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify({ ok: true }), { status: 200 }));
+    await expect(apiFetch('/auth/sign-out', noContentSchema, { method: 'POST' })).rejects.toMatchObject({ code: 'RESPONSE_SHAPE' });
   });
 });

@@ -1,4 +1,5 @@
-import type { ApiErrorBody } from '@linkloom/shared';
+import { describeIssues, type ApiErrorBody } from '@linkloom/shared';
+import type { z, ZodType } from 'zod';
 import { clearSession, getSession } from './session.js';
 
 /** A failed API call, carrying the server's `{ statusCode, code, message, details }`. */
@@ -87,19 +88,32 @@ function handleUnauthorized(status: number): void {
   }
 }
 
-/** The one JSON client every API hook uses. */
-export async function apiFetch<T>(path: string, options: ApiFetchOptions = {}): Promise<T> {
+/**
+ * The answer parsed with the route's shared response schema. A field the screen needs that is missing or of
+ * another type fails here, in words, instead of as a crash deep in a component (docs/api.md).
+ */
+export function parseResponse<S extends ZodType>(schema: S, body: unknown, route: string, status: number): z.output<S> {
+  const result = schema.safeParse(body);
+  if (result.success) return result.data;
+  const problems = describeIssues(result.error.issues, 3);
+  throw new ApiError(
+    status,
+    'RESPONSE_SHAPE',
+    `The server's answer to ${route} is not what this screen expects (${problems.join('; ')}). ` +
+      'Reload the page; if this stays, the server and the app are out of step: tell whoever runs Linkloom.',
+    problems,
+  );
+}
+
+/** The one JSON client every API hook uses; `schema` is the route's response schema from `@linkloom/shared`. */
+export async function apiFetch<S extends ZodType>(path: string, schema: S, options: ApiFetchOptions = {}): Promise<z.output<S>> {
   const { method = 'GET', body, query, signal } = options;
   const headers: Record<string, string> = { Accept: 'application/json', ...authHeaders() };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
+  const url = apiUrl(path, query);
   let response: Response;
   try {
-    response = await fetch(apiUrl(path, query), {
-      method,
-      headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
-      signal,
-    });
+    response = await fetch(url, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), signal });
   } catch (error) {
     if ((error as Error).name === 'AbortError') throw error;
     throw new ApiError(0, 'NETWORK', describeStatus(0));
@@ -108,16 +122,29 @@ export async function apiFetch<T>(path: string, options: ApiFetchOptions = {}): 
     handleUnauthorized(response.status);
     throw await toApiError(response);
   }
-  if (response.status === 204) return undefined as T;
-  const text = await response.text();
-  return (text ? JSON.parse(text) : undefined) as T;
+  const text = response.status === 204 ? '' : await response.text();
+  return parseResponse(schema, text ? parseJson(text, response.status) : undefined, `${method} ${url.split('?')[0]}`, response.status);
+}
+
+function parseJson(text: string, status: number): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new ApiError(status, 'RESPONSE_NOT_JSON', 'The server answered with something that is not JSON. Reload the page and try again.');
+  }
 }
 
 /** Multipart upload with real progress (fetch cannot report upload progress; XHR can). */
-export function apiUpload<T>(path: string, formData: FormData, onProgress?: (fraction: number) => void): Promise<T> {
-  return new Promise<T>((resolve, reject) => {
+export function apiUpload<S extends ZodType>(
+  path: string,
+  schema: S,
+  formData: FormData,
+  onProgress?: (fraction: number) => void,
+): Promise<z.output<S>> {
+  return new Promise((resolve, reject) => {
+    const url = apiUrl(path);
     const xhr = new XMLHttpRequest();
-    xhr.open('POST', apiUrl(path));
+    xhr.open('POST', url);
     xhr.setRequestHeader('Accept', 'application/json');
     const token = getSession()?.accessToken;
     if (token) xhr.setRequestHeader('Authorization', `Bearer ${token}`);
@@ -132,7 +159,13 @@ export function apiUpload<T>(path: string, formData: FormData, onProgress?: (fra
       } catch {
         body = undefined;
       }
-      if (xhr.status >= 200 && xhr.status < 300) return resolve(body as T);
+      if (xhr.status >= 200 && xhr.status < 300) {
+        try {
+          return resolve(parseResponse(schema, body, `POST ${url}`, xhr.status));
+        } catch (error) {
+          return reject(error);
+        }
+      }
       handleUnauthorized(xhr.status);
       const err = (body ?? {}) as Partial<ApiErrorBody>;
       reject(new ApiError(xhr.status, err.code ?? `HTTP_${xhr.status}`, err.message ?? describeStatus(xhr.status), err.details ?? []));

@@ -1,12 +1,18 @@
 import { z } from 'zod';
+import { named } from './contract.js';
 
-/** Error body of every failed API call. */
-export interface ApiErrorBody {
-  statusCode: number;
-  code: string;
-  message: string;
-  details?: unknown[];
-}
+/** Error body of every failed API call (docs/api.md "Errors"). */
+export const apiErrorBodySchema = named(
+  'ApiError',
+  z.object({
+    statusCode: z.int(),
+    code: z.string(),
+    message: z.string(),
+    details: z.array(z.unknown()).optional(),
+  }),
+  'A failed call: the HTTP status again, a stable code for programs and a sentence for people.',
+);
+export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;
 
 export const MAX_PAGE_SIZE = 500;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { named } from './contract.js';
 
 const pagePath = z.string().trim().min(1).max(512);
 const url = z
@@ -59,6 +60,9 @@ const settingsShape = {
   sourceFolder: z.string().trim().min(1).max(1024).nullable(),
   pruning: z.object(pruningShape).strict(),
 };
+
+/** The stored settings as the API answers them: every field present. */
+export const docSetSettingsValueSchema = named('DocSetSettings', z.object({ ...settingsShape, pruning: z.object(pruningShape) }));
 
 /** Every setting of a doc set (see the HTTP contract) with the defaults most doc sets need. */
 export const DEFAULT_DOC_SET_SETTINGS = {

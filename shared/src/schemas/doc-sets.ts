@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { docSetSettingsPatchSchema, type DocSetSettings } from './doc-set-settings.js';
+import { isoDateTime, listOf, named, recordId } from './contract.js';
+import { docSetSettingsPatchSchema, docSetSettingsValueSchema } from './doc-set-settings.js';
 
 export const createDocSetSchema = z
   .object({
@@ -20,11 +21,16 @@ export const updateDocSetSchema = z
 export type CreateDocSetInput = z.infer<typeof createDocSetSchema>;
 export type UpdateDocSetInput = z.infer<typeof updateDocSetSchema>;
 
-export interface DocSet {
-  id: string;
-  name: string;
-  description: string;
-  settings: DocSetSettings;
-  createdAt: string;
-  updatedAt: string;
-}
+export const docSetSchema = named(
+  'DocSet',
+  z.object({
+    id: recordId,
+    name: z.string(),
+    description: z.string(),
+    settings: docSetSettingsValueSchema,
+    createdAt: isoDateTime,
+    updatedAt: isoDateTime,
+  }),
+);
+export const docSetListSchema = listOf('DocSetList', docSetSchema);
+export type DocSet = z.infer<typeof docSetSchema>;

@@ -1,62 +1,65 @@
 import { z } from 'zod';
+import { isoDateTime, listOf, named, recordId } from './contract.js';
+import { docSetSettingsValueSchema } from './doc-set-settings.js';
 
-/** Counts of every finding of one run (the `counts` of a run in the HTTP contract). */
-export interface RunCounts {
-  pages: number;
-  links: number;
-  internalLinks: number;
-  externalLinks: number;
-  brokenLinks: number;
-  brokenAnchors: number;
-  brokenAssets: number;
-  unsafeLinks: number;
-  ambiguousLinks: number;
-  redirectedLinks: number;
-  outOfScopeLinks: number;
-  orphans: number;
-  deadEnds: number;
-  unreachable: number;
-  deepPages: number;
-  islands: number;
-}
+const count = z.int().nonnegative();
 
-/** A page of a run as the page list and the page detail return it. */
-export interface RunPageItem {
-  path: string;
-  title: string;
-  stationaryScore: number;
-  timesAverage: number;
-  rank: number;
-  inboundCount: number;
-  outboundCount: number;
-  depth: number | null;
-  reachable: boolean;
-  orphan: boolean;
-  deadEnd: boolean;
-  deep: boolean;
-  island: boolean;
-  brokenLinkCount: number;
-  wordCount: number;
-}
+/** Counts of every finding of one run (the `counts` of a run, docs/api.md "Runs"). */
+export const runCountsSchema = named(
+  'RunCounts',
+  z.object({
+    pages: count,
+    links: count,
+    internalLinks: count,
+    externalLinks: count,
+    brokenLinks: count,
+    brokenAnchors: count,
+    brokenAssets: count,
+    unsafeLinks: count,
+    ambiguousLinks: count,
+    redirectedLinks: count,
+    outOfScopeLinks: count,
+    orphans: count,
+    deadEnds: count,
+    unreachable: count,
+    deepPages: count,
+    islands: count,
+  }),
+);
+export type RunCounts = z.infer<typeof runCountsSchema>;
 
-/** A run as GET .../runs and .../runs/:runId answer it. `number` counts the doc set's runs from 1, oldest first. */
-export const runViewSchema = z.object({
-  id: z.string(),
-  number: z.number().int().nullable(),
-  docSetId: z.string(),
-  snapshotId: z.string(),
-  status: z.enum(['queued', 'running', 'finished', 'failed']),
-  trigger: z.enum(['import', 'manual', 'nightly']),
-  settings: z.record(z.string(), z.unknown()),
-  createdAt: z.string(),
-  startedAt: z.string().nullable(),
-  finishedAt: z.string().nullable(),
-  iterations: z.number().nullable(),
-  residual: z.number().nullable(),
-  durationMs: z.number().nullable(),
-  counts: z.custom<RunCounts>().nullable(),
-  warnings: z.array(z.object({ code: z.string(), message: z.string() })),
-  error: z.string().nullable(),
-  createdBy: z.string().nullable(),
-});
-export type RunViewItem = z.infer<typeof runViewSchema>;
+export const RUN_STATUSES = ['queued', 'running', 'finished', 'failed'] as const;
+export const RUN_TRIGGERS = ['import', 'manual', 'nightly'] as const;
+
+/** One analysis of a snapshot with the settings it used; `counts` once it has finished. */
+export const runSchema = named(
+  'Run',
+  z.object({
+    id: recordId,
+    /** 1, 2, 3... per doc set in the order runs were queued, so people can name a run ("verified by run 7"). */
+    number: z.int().positive().nullable(),
+    docSetId: recordId,
+    snapshotId: recordId,
+    status: z.enum(RUN_STATUSES),
+    trigger: z.enum(RUN_TRIGGERS),
+    settings: docSetSettingsValueSchema,
+    createdAt: isoDateTime,
+    startedAt: isoDateTime.nullable(),
+    finishedAt: isoDateTime.nullable(),
+    iterations: z.int().nonnegative().nullable(),
+    residual: z.number().nonnegative().nullable(),
+    durationMs: z.int().nonnegative().nullable(),
+    counts: runCountsSchema.nullable(),
+    /** Things a reader should know about how the run was made (e.g. no entry page found). */
+    warnings: z.array(z.object({ code: z.string(), message: z.string() })),
+    error: z.string().nullable(),
+    createdBy: recordId.nullable(),
+  }),
+);
+export const runListSchema = listOf('RunList', runSchema);
+/** The answer to starting a run: queued (202), it goes on in the background. */
+export const runAcceptedSchema = named('RunAccepted', z.object({ run: runSchema }));
+
+export type Run = z.infer<typeof runSchema>;
+export type RunStatus = Run['status'];
+export type RunTrigger = Run['trigger'];

@@ -1,4 +1,5 @@
-// The tasks API's request contracts (zod): the server validates with them, the front end's forms send them.
+// The tasks API's request shapes (zod): the server validates with them, the front end's forms send them; the
+// answers' shapes are in work.ts.
 import { z } from 'zod';
 import { listQuerySchema } from './common.js';
 import { TASK_KINDS, TASK_PRIORITIES, TASK_STATUSES, TASK_STATUSES_SET_BY_PEOPLE } from './work.js';
@@ -54,7 +55,7 @@ export const bulkCreateTasksSchema = z
     dueDate: isoDate.nullish(),
   })
   .strict()
-  .refine((v) => (v.pagePaths.length > 0) !== (v.links.length > 0), {
+  .refine((v) => v.pagePaths.length > 0 !== v.links.length > 0, {
     message: 'select either pages (pagePaths) or links (links), at least one',
     path: ['pagePaths'],
   });

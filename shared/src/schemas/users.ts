@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { roleSchema, type Role } from './roles.js';
+import { isoDateTime, listOf, named, recordId } from './contract.js';
+import { roleSchema } from './roles.js';
 
 /**
  * A few of the most common passwords. NIST SP 800-63B (2017), section 5.1.1.2, asks verifiers to refuse
@@ -55,22 +56,25 @@ export const updateUserSchema = z
   .strict()
   .refine((v) => Object.keys(v).length > 0, 'give at least one of role, disabled, name');
 
-export interface UserSummary {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-}
-export interface UserDetails extends UserSummary {
-  disabled: boolean;
-  createdAt: string;
-  lastSignInAt: string | null;
-}
-export interface SignInResult {
-  accessToken: string;
-  expiresAt: string;
-  user: UserSummary;
-}
+export const userSummarySchema = named(
+  'UserSummary',
+  z.object({ id: recordId, email: z.string(), name: z.string(), role: roleSchema }),
+  'Who a person is, as sign-in and the session carry it.',
+);
+export const userDetailsSchema = named(
+  'UserDetails',
+  userSummarySchema.extend({ disabled: z.boolean(), createdAt: isoDateTime, lastSignInAt: isoDateTime.nullable() }),
+);
+export const userDetailsListSchema = listOf('UserDetailsList', userDetailsSchema);
+export const signInResultSchema = named(
+  'SignInResult',
+  z.object({ accessToken: z.string().min(1), expiresAt: isoDateTime, user: userSummarySchema }),
+  'Send `Authorization: Bearer <accessToken>` until `expiresAt`.',
+);
+
+export type UserSummary = z.infer<typeof userSummarySchema>;
+export type UserDetails = z.infer<typeof userDetailsSchema>;
+export type SignInResult = z.infer<typeof signInResultSchema>;
 export type SignInInput = z.infer<typeof signInSchema>;
 export type CreateUserInput = z.infer<typeof createUserSchema>;
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;

@@ -1,6 +1,8 @@
 import { z } from 'zod';
+import { isoDateTime, listOf, named, pagedShape, recordId } from './contract.js';
+import { roleSchema } from './roles.js';
 
-/** Fix tasks and the pruning list as the HTTP contract carries them (docs/mail-and-work.md). */
+/** Fix tasks and the pruning list as the HTTP contract carries them (docs/api.md "Work", docs/mail-and-work.md). */
 export const TASK_KINDS = [
   'add-inbound-links',
   'repair-broken-links',
@@ -25,7 +27,7 @@ export type TaskPriority = (typeof TASK_PRIORITIES)[number];
 export const taskLinkFindingSchema = z.object({
   sourcePath: z.string().optional(),
   href: z.string(),
-  line: z.number().int(),
+  line: z.int().nonnegative(),
   status: z.string(),
 });
 
@@ -44,7 +46,7 @@ export type TaskLinkFinding = z.infer<typeof taskLinkFindingSchema>;
 export const taskCheckItemSchema = z.object({
   pagePath: z.string(),
   href: z.string().nullable(),
-  line: z.number().int().nullable(),
+  line: z.int().nonnegative().nullable(),
   stillFound: z.boolean(),
   /** The link's status in that run when still found (broken or broken-anchor). */
   status: z.string().nullable(),
@@ -52,67 +54,119 @@ export const taskCheckItemSchema = z.object({
 
 /** The latest run's verdict on a task, finding by finding. */
 export const taskCheckSchema = z.object({
-  runId: z.string(),
-  runNumber: z.number().int().nullable(),
-  at: z.string(),
+  runId: recordId,
+  runNumber: z.int().positive().nullable(),
+  at: isoDateTime,
   outcome: z.enum(['verified', 'reopened', 'still-found', 'partly-fixed']),
   items: z.array(taskCheckItemSchema),
 });
 export type TaskCheck = z.infer<typeof taskCheckSchema>;
 export type TaskCheckItem = z.infer<typeof taskCheckItemSchema>;
 
-export const taskItemSchema = z.object({
-  id: z.string(),
-  docSetId: z.string(),
-  docSetName: z.string().nullable(),
-  pagePath: z.string(),
-  kind: z.enum(TASK_KINDS),
-  title: z.string(),
-  details: z.string(),
-  finding: taskFindingSchema,
-  assignee: z.object({ id: z.string(), name: z.string(), email: z.string() }).nullable(),
-  priority: z.enum(TASK_PRIORITIES),
-  dueDate: z.string().nullable(),
-  overdue: z.boolean(),
-  status: z.enum(TASK_STATUSES),
-  verification: z.enum(['verified', 'flagged']).nullable(),
-  verifiedAt: z.string().nullable(),
-  check: taskCheckSchema.nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
-});
+export const taskItemSchema = named(
+  'Task',
+  z.object({
+    id: recordId,
+    docSetId: recordId,
+    docSetName: z.string().nullable(),
+    pagePath: z.string(),
+    kind: z.enum(TASK_KINDS),
+    title: z.string(),
+    details: z.string(),
+    finding: taskFindingSchema,
+    assignee: z.object({ id: recordId, name: z.string(), email: z.string() }).nullable(),
+    priority: z.enum(TASK_PRIORITIES),
+    /** A calendar day, `YYYY-MM-DD`. */
+    dueDate: z.iso.date().nullable(),
+    overdue: z.boolean(),
+    status: z.enum(TASK_STATUSES),
+    /** Set by later runs: `verified` when the findings are gone, `flagged` when done but still there. */
+    verification: z.enum(['verified', 'flagged']).nullable(),
+    verifiedAt: isoDateTime.nullable(),
+    /** The newest run's verdict finding by finding; null until a run has checked the task. */
+    check: taskCheckSchema.nullable(),
+    createdAt: isoDateTime,
+    updatedAt: isoDateTime,
+  }),
+);
 export type TaskItem = z.infer<typeof taskItemSchema>;
 
-export const taskEventItemSchema = z.object({
-  id: z.string(),
-  type: z.enum(['comment', 'change']),
-  actor: z.object({ id: z.string().nullable(), name: z.string() }),
-  body: z.string(),
-  changes: z.record(z.string(), z.object({ from: z.unknown(), to: z.unknown() })),
-  at: z.string(),
-});
-export type TaskEventItem = z.infer<typeof taskEventItemSchema>;
+export const taskEventSchema = named(
+  'TaskEvent',
+  z.object({
+    id: recordId,
+    type: z.enum(['comment', 'change']),
+    actor: z.object({ id: recordId.nullable(), name: z.string() }),
+    body: z.string(),
+    changes: z.record(z.string(), z.object({ from: z.unknown(), to: z.unknown() })),
+    at: isoDateTime,
+  }),
+);
+export type TaskEventItem = z.infer<typeof taskEventSchema>;
 
-export const taskDetailSchema = taskItemSchema.extend({ events: z.array(taskEventItemSchema) });
+export const taskDetailSchema = named('TaskDetail', taskItemSchema.extend({ events: z.array(taskEventSchema) }));
 export type TaskDetail = z.infer<typeof taskDetailSchema>;
+export const taskListSchema = listOf('TaskList', taskItemSchema);
+/** The tasks made by one bulk request: one per selected row, or one grouped task. */
+export const taskBatchSchema = named('TaskBatch', z.object({ items: z.array(taskItemSchema) }));
 
-export type PruningDecision = 'approve' | 'reject' | 'keep';
+export const assigneeSchema = named('Assignee', z.object({ id: recordId, name: z.string(), email: z.string(), role: roleSchema }));
+export const assigneeListSchema = listOf('AssigneeList', assigneeSchema);
+export type Assignee = z.infer<typeof assigneeSchema>;
 
-export interface PruningReason {
-  rule: 'orphan' | 'unreachable' | 'low-score' | 'stale' | 'thin' | 'nominated';
-  detail: string;
-}
+export const PRUNING_DECISIONS = ['approve', 'reject', 'keep'] as const;
+export type PruningDecision = (typeof PRUNING_DECISIONS)[number];
+export const PRUNING_RULES = ['orphan', 'unreachable', 'low-score', 'stale', 'thin', 'nominated'] as const;
 
-export interface PruningItem {
-  path: string;
-  title: string;
-  reasons: PruningReason[];
-  inLatestRun: boolean;
-  inboundCount: number | null;
-  stationaryScore: number | null;
-  wordCount: number | null;
-  reviewedAt: string | null;
-  firstProposedAt: string;
-  nominations: { by: string; reason: string; at: string }[];
-  decision: null | { decision: PruningDecision; note: string; by: string; at: string; flagged: boolean; flagReason: string | null };
-}
+export const pruningReasonSchema = z.object({ rule: z.enum(PRUNING_RULES), detail: z.string() });
+export type PruningReason = z.infer<typeof pruningReasonSchema>;
+
+export const pruningItemSchema = named(
+  'PruningItem',
+  z.object({
+    path: z.string(),
+    title: z.string(),
+    reasons: z.array(pruningReasonSchema),
+    inLatestRun: z.boolean(),
+    inboundCount: z.int().nonnegative().nullable(),
+    stationaryScore: z.number().nonnegative().nullable(),
+    wordCount: z.int().nonnegative().nullable(),
+    /** As the page's front matter gives it (usually `YYYY-MM-DD`). */
+    reviewedAt: z.string().nullable(),
+    firstProposedAt: isoDateTime,
+    nominations: z.array(z.object({ by: z.string(), reason: z.string(), at: isoDateTime })),
+    decision: z
+      .object({
+        decision: z.enum(PRUNING_DECISIONS),
+        note: z.string(),
+        by: z.string(),
+        at: isoDateTime,
+        flagged: z.boolean(),
+        flagReason: z.string().nullable(),
+      })
+      .nullable(),
+  }),
+);
+export type PruningItem = z.infer<typeof pruningItemSchema>;
+
+export const pruningListSchema = named(
+  'PruningList',
+  z.object({
+    ...pagedShape(pruningItemSchema),
+    /** Send it back with decisions: a newer list answers 409 instead of overwriting what others decided. */
+    version: z.int().nonnegative(),
+    runId: recordId.nullable(),
+    rules: z.object({
+      lowScorePercentile: z.number(),
+      staleDays: z.int(),
+      thinWordCount: z.int(),
+      protectGlobs: z.array(z.string()),
+    }),
+  }),
+);
+export type PruningList = z.infer<typeof pruningListSchema>;
+
+export const pruningDecisionsResultSchema = named(
+  'PruningDecisionsResult',
+  z.object({ version: z.int().nonnegative(), decided: z.int().nonnegative() }),
+);

@@ -4,6 +4,8 @@ import { z } from 'zod';
 import { type AuthUser, CurrentUser, MinRole } from '../../common/auth.decorators.js';
 import { ApiZodBody, ZodPipe } from '../../common/zod-pipe.js';
 import { ApiTokensService } from './api-tokens.service.js';
+import { ApiNoContentResponse, ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { apiTokenListSchema, createdApiTokenSchema } from '@linkloom/shared';
 
 const createTokenSchema = z.object({ name: z.string().trim().min(1, 'give the token a name, e.g. the CI job').max(80) }).strict();
 
@@ -17,6 +19,7 @@ export class ApiTokensController {
   /** The secret is in this answer only; store it in the CI job's secrets. */
   @Post()
   @ApiZodBody(createTokenSchema)
+  @ApiZodResponse(createdApiTokenSchema, { status: 201 })
   create(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -26,12 +29,14 @@ export class ApiTokensController {
   }
 
   @Get()
+  @ApiZodResponse(apiTokenListSchema)
   list(@Param('docSetId', ParseUUIDPipe) docSetId: string) {
     return this.tokens.list(docSetId);
   }
 
   @Delete(':tokenId')
   @HttpCode(204)
+  @ApiNoContentResponse()
   async revoke(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,

@@ -32,7 +32,9 @@ export class ApiTokensService implements ApiTokenVerifier {
   async list(docSetId: string) {
     await this.docSets.get(docSetId);
     const rows = await this.repository.list(docSetId);
-    return { items: rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), lastUsedAt: r.lastUsedAt?.toISOString() ?? null })) };
+    const items = rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), lastUsedAt: r.lastUsedAt?.toISOString() ?? null }));
+    // Every list has the paged shape (docs/api.md "Lists"); a doc set has a handful of tokens, all on one page.
+    return { items, total: items.length, page: 1, pageSize: items.length };
   }
 
   async revoke(actor: AuthUser, docSetId: string, id: string): Promise<void> {

@@ -1,10 +1,11 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { listQuerySchema } from '@linkloom/shared';
+import { auditListSchema, listQuerySchema } from '@linkloom/shared';
 import { z } from 'zod';
 import { MinRole } from '../../common/auth.decorators.js';
 import { ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
 import { AuditService } from './audit.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
 
 const auditQuerySchema = listQuerySchema
   .extend({ entityType: z.string().max(64).optional(), entityId: z.string().max(1024).optional(), docSetId: z.string().uuid().optional() })
@@ -19,6 +20,7 @@ export class AuditController {
 
   @Get()
   @ApiZodQuery(auditQuerySchema)
+  @ApiZodResponse(auditListSchema)
   list(@Query(new ZodPipe(auditQuerySchema)) query: z.infer<typeof auditQuerySchema>) {
     return this.audit.list(query, query.page, query.pageSize);
   }

@@ -1,20 +1,11 @@
 import { Injectable } from '@nestjs/common';
-import type { ListResult } from '@linkloom/shared';
+import type { AuditEntry, ListResult } from '@linkloom/shared';
 import type { AuthUser } from '../../common/auth.decorators.js';
 import type { Executor } from '../../db/database.js';
 import { AuditRepository } from './audit.repository.js';
 
-export interface AuditItem {
-  id: number;
-  at: string;
-  actorId: string | null;
-  actorEmail: string | null;
-  action: string;
-  entityType: string;
-  entityId: string;
-  docSetId: string | null;
-  details: Record<string, unknown>;
-}
+/** An audit entry as the API lists it (the shared response shape). */
+export type AuditItem = AuditEntry;
 
 /** Records who did what to which entity; pass the transaction handle when the change itself is transactional. */
 @Injectable()

@@ -4,6 +4,8 @@ import { readFileSync } from 'node:fs';
 import { APP_CONFIG, type AppConfig } from '../../config/app-config.js';
 import { Public } from '../../common/auth.decorators.js';
 import { DbService } from '../../db/db.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { healthSchema } from '@linkloom/shared';
 
 const VERSION = (JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
 
@@ -17,6 +19,7 @@ export class HealthController {
 
   @Public()
   @Get()
+  @ApiZodResponse(healthSchema)
   health() {
     return { status: 'ok', database: this.database.kind, version: VERSION, demo: this.config.demo };
   }

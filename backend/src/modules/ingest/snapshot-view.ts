@@ -1,28 +1,8 @@
-import type { SnapshotRow, SnapshotWarning } from '../../db/schema/index.js';
+import type { Snapshot } from '@linkloom/shared';
+import type { SnapshotRow } from '../../db/schema/index.js';
 
-/** A snapshot as the HTTP contract shows it (API.md "Doc sets and imports"). */
-export interface SnapshotView {
-  id: string;
-  docSetId: string;
-  status: SnapshotRow['status'];
-  source: SnapshotRow['source'];
-  label: string | null;
-  progress: { done: number; total: number };
-  error: string | null;
-  errorCode: string | null;
-  pageCount: number;
-  linkCount: number;
-  assetCount: number;
-  reusedPageCount: number;
-  warnings: SnapshotWarning[];
-  ignored: { path: string; reason: string }[];
-  createdAt: string;
-  createdBy: string | null;
-  finishedAt: string | null;
-  archiveSha256: string | null;
-  archiveBytes: number | null;
-  importMs: number | null;
-}
+/** A snapshot as the API shows it: the shared response shape (docs/api.md "Doc sets and imports"). */
+export type SnapshotView = Snapshot;
 
 export function toSnapshotView(row: SnapshotRow): SnapshotView {
   return {

@@ -5,6 +5,8 @@ import { type AuthUser, CurrentUser } from '../../common/auth.decorators.js';
 import { ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
 import { RunIdPipe } from '../runs/run-id.pipe.js';
 import { LinkMapService } from './link-map.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { linkMapSchema } from '@linkloom/shared';
 
 const mapQuerySchema = z
   .object({
@@ -28,6 +30,7 @@ export class LinkMapController {
   /** The link map: pages, or folders when the pages would not fit (`limit`); drill down with `folder`. */
   @Get('graph')
   @ApiZodQuery(mapQuerySchema)
+  @ApiZodResponse(linkMapSchema)
   graph(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,

@@ -1,18 +1,13 @@
 import { Injectable } from '@nestjs/common';
+import { pageFlags } from '@linkloom/shared';
 import type { AuthUser } from '../../common/auth.decorators.js';
 import { RunsService } from '../runs/runs.service.js';
-import { LinkMapRepository, type MapPageRow } from './link-map.repository.js';
+import { LinkMapRepository } from './link-map.repository.js';
 
 export interface MapQuery {
   folder: string;
   folderDepth: number;
   limit: number;
-}
-
-function pageFlags(p: MapPageRow): string[] {
-  return [p.orphan && 'orphan', p.deadEnd && 'dead-end', !p.reachable && 'unreachable', p.deep && 'deep', p.island && 'island'].filter(
-    Boolean,
-  ) as string[];
 }
 
 /**

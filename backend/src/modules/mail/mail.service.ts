@@ -130,9 +130,10 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
     status: OutboxRow['status'] | undefined,
     page: number,
     pageSize: number,
-  ): Promise<ListResult<Omit<OutboxRow, 'text' | 'html'>>> {
+  ): Promise<ListResult<Omit<OutboxRow, 'text' | 'html' | 'headers'>>> {
     const { rows, total } = await this.outbox.list(status, (page - 1) * pageSize, pageSize);
-    return { items: rows.map(({ text: _t, html: _h, ...rest }) => rest), total, page, pageSize };
+    // The outbox list shows delivery state; bodies and header lines are read from the mailbox message.
+    return { items: rows.map(({ text: _t, html: _h, headers: _l, ...rest }) => rest), total, page, pageSize };
   }
 
   async listMailbox(page: number, pageSize: number) {

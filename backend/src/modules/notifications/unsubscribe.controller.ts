@@ -1,6 +1,8 @@
 import { Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Throttle } from '@nestjs/throttler';
+import { unsubscribeInfoSchema, unsubscribeResultSchema } from '@linkloom/shared';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
 import { Public } from '../../common/auth.decorators.js';
 import { UnsubscribeService } from './unsubscribe.service.js';
 
@@ -17,12 +19,14 @@ export class UnsubscribeController {
   constructor(private readonly unsubscribe: UnsubscribeService) {}
 
   @Get(':token')
+  @ApiZodResponse(unsubscribeInfoSchema)
   describe(@Param('token') token: string) {
     return this.unsubscribe.describe(token);
   }
 
   @Post(':token')
   @HttpCode(200)
+  @ApiZodResponse(unsubscribeResultSchema)
   confirm(@Param('token') token: string) {
     return this.unsubscribe.unsubscribe(token);
   }

@@ -12,6 +12,8 @@ import {
   type PruningListQuery,
   pruningListQuerySchema,
 } from './pruning.schemas.js';
+import { ApiFileResponse, ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { pruningDecisionsResultSchema, pruningItemSchema, pruningListSchema } from '@linkloom/shared';
 
 function send(res: Response, file: ExportFile): string {
   res.setHeader('Content-Type', file.contentType);
@@ -28,6 +30,7 @@ export class PruningController {
 
   @Get()
   @ApiZodQuery(pruningListQuerySchema)
+  @ApiZodResponse(pruningListSchema)
   list(@Param('docSetId', ParseUUIDPipe) docSetId: string, @Query(new ZodPipe(pruningListQuerySchema)) query: PruningListQuery) {
     return this.pruning.get(docSetId, query);
   }
@@ -35,6 +38,7 @@ export class PruningController {
   @Post('nominations')
   @MinRole('writer')
   @ApiZodBody(nominationSchema)
+  @ApiZodResponse(pruningItemSchema, { status: 201 })
   nominate(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -47,6 +51,7 @@ export class PruningController {
   @HttpCode(200)
   @MinRole('editor')
   @ApiZodBody(decisionsSchema)
+  @ApiZodResponse(pruningDecisionsResultSchema)
   decide(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -56,11 +61,13 @@ export class PruningController {
   }
 
   @Get('export.csv')
+  @ApiFileResponse('text/csv', 'The approved pages with notes, as CSV.')
   async exportCsv(@Param('docSetId', ParseUUIDPipe) docSetId: string, @Res({ passthrough: true }) res: Response) {
     return send(res, await this.pruning.exportApproved(docSetId, 'csv'));
   }
 
   @Get('export.txt')
+  @ApiFileResponse('text/plain', 'The approved paths, one per line, for scripts.')
   async exportTxt(@Param('docSetId', ParseUUIDPipe) docSetId: string, @Res({ passthrough: true }) res: Response) {
     return send(res, await this.pruning.exportApproved(docSetId, 'txt'));
   }

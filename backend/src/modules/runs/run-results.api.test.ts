@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import type { Run } from '@linkloom/shared';
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DbService } from '../../db/db.service.js';
@@ -12,7 +13,7 @@ describe('run results', () => {
   let t: TestApp;
   let docSetId: string;
   let base: string;
-  let run: Record<string, any>;
+  let run: Run;
   const paths = (body: { items: { path: string }[] }) => body.items.map((i) => i.path);
 
   beforeAll(async () => {
@@ -148,8 +149,17 @@ describe('run results', () => {
     expect(external.href).toBe('https://example.org/parts');
     const grouped = (await read(t, `${base}/links?status=broken&groupBy=target`)).body;
     expect(grouped.items).toEqual([
-      { targetPath: 'missing.md', linkCount: 2, sourcePageCount: 2 },
-      { targetPath: 'img/vise.png', linkCount: 1, sourcePageCount: 1 },
+      // The pages linking to each missing target, with their line, as the handbook fixture lays them out.
+      {
+        targetPath: 'missing.md',
+        linkCount: 2,
+        sourcePageCount: 2,
+        sources: [
+          { sourcePath: 'index.md', line: 11, column: 1 },
+          { sourcePath: 'tools/setup.md', line: 8, column: 1 },
+        ],
+      },
+      { targetPath: 'img/vise.png', linkCount: 1, sourcePageCount: 1, sources: [{ sourcePath: 'tools/setup.md', line: 10, column: 1 }] },
     ]);
     expect((await read(t, `${base}/links?page=tools/setup.md`)).body.total).toBe(4);
     expect((await read(t, `${base}/links?pageSize=5&page=3`)).body).toMatchObject({ total: 14, page: 3 });

@@ -18,7 +18,16 @@ import {
   type PageListQuery,
 } from './run-queries.js';
 import { RunResultsService } from './run-results.service.js';
-import type { ExportView } from './export/export.service.js';
+import { ApiFileResponse, ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import {
+  islandListSchema,
+  linkListOrGroupsSchema,
+  pageDetailSchema,
+  runDiffSchema,
+  runPageListSchema,
+  scoreDistributionSchema,
+  searchResultSchema,
+} from '@linkloom/shared';
 
 /** Results of one run; `:runId` may be `latest`. Every signed-in role may read them. */
 @ApiTags('runs')
@@ -29,6 +38,7 @@ export class RunResultsController {
 
   @Get('pages')
   @ApiZodQuery(pageListQuerySchema)
+  @ApiZodResponse(runPageListSchema)
   pages(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -40,6 +50,7 @@ export class RunResultsController {
 
   @Get('page')
   @ApiZodQuery(pageDetailQuerySchema)
+  @ApiZodResponse(pageDetailSchema)
   page(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -51,6 +62,7 @@ export class RunResultsController {
 
   @Get('links')
   @ApiZodQuery(linkListQuerySchema)
+  @ApiZodResponse(linkListOrGroupsSchema, { description: 'LinkList, or LinkTargetGroupList with `groupBy=target`' })
   links(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -62,6 +74,7 @@ export class RunResultsController {
 
   @Get('islands')
   @ApiZodQuery(islandsQuerySchema)
+  @ApiZodResponse(islandListSchema)
   islands(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -72,6 +85,7 @@ export class RunResultsController {
   }
 
   @Get('score-distribution')
+  @ApiZodResponse(scoreDistributionSchema)
   scoreDistribution(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -82,6 +96,7 @@ export class RunResultsController {
 
   @Get('search')
   @ApiZodQuery(searchQuerySchema)
+  @ApiZodResponse(searchResultSchema)
   search(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -93,6 +108,7 @@ export class RunResultsController {
 
   @Get('diff')
   @ApiZodQuery(diffQuerySchema)
+  @ApiZodResponse(runDiffSchema)
   diff(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -104,6 +120,7 @@ export class RunResultsController {
 
   @Get('export.csv')
   @ApiZodQuery(exportQuerySchema)
+  @ApiFileResponse('text/csv', 'The rows of the chosen view, as CSV.')
   async exportCsv(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,

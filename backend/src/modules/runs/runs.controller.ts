@@ -5,6 +5,8 @@ import { ApiZodBody, ApiZodQuery, ZodPipe } from '../../common/zod-pipe.js';
 import { RunIdPipe } from './run-id.pipe.js';
 import { runListQuerySchema, startRunSchema, type StartRunInput } from './run-queries.js';
 import { RunsService } from './runs.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { runAcceptedSchema, runListSchema, runSchema } from '@linkloom/shared';
 
 @ApiTags('runs')
 @ApiBearerAuth()
@@ -16,6 +18,7 @@ export class RunsController {
   @HttpCode(202)
   @MinRole('editor')
   @ApiZodBody(startRunSchema)
+  @ApiZodResponse(runAcceptedSchema, { status: 202 })
   async start(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -26,6 +29,7 @@ export class RunsController {
 
   @Get()
   @ApiZodQuery(runListQuerySchema)
+  @ApiZodResponse(runListSchema)
   list(
     @CurrentUser() actor: AuthUser,
     @Param('docSetId', ParseUUIDPipe) docSetId: string,
@@ -35,6 +39,7 @@ export class RunsController {
   }
 
   @Get(':runId')
+  @ApiZodResponse(runSchema)
   get(@CurrentUser() actor: AuthUser, @Param('docSetId', ParseUUIDPipe) docSetId: string, @Param('runId', RunIdPipe) runId: string) {
     return this.runs.get(actor, docSetId, runId);
   }

@@ -3,6 +3,8 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, MinRole } from '../../common/auth.decorators.js';
 import { AuditService } from '../audit/audit.service.js';
 import { NightlyJobService } from './nightly-job.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { runNowResultSchema, scheduleStatusSchema } from '@linkloom/shared';
 
 @ApiTags('schedule')
 @ApiBearerAuth()
@@ -15,6 +17,7 @@ export class ScheduleController {
 
   @Get()
   @MinRole('editor')
+  @ApiZodResponse(scheduleStatusSchema)
   status() {
     return this.nightly.status();
   }
@@ -23,6 +26,7 @@ export class ScheduleController {
   @Post('run-now')
   @MinRole('editor')
   @HttpCode(202)
+  @ApiZodResponse(runNowResultSchema, { status: 202 })
   async runNow(@CurrentUser() actor: AuthUser) {
     const status = await this.nightly.status();
     if (status.running) return { started: false, reason: 'The nightly job is already running; it was not started twice.' };

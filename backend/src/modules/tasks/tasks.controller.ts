@@ -15,6 +15,8 @@ import {
 } from '@linkloom/shared';
 import { TaskCreationService } from './task-creation.service.js';
 import { TasksService } from './tasks.service.js';
+import { ApiZodResponse } from '../../common/api-contract/api-response.decorators.js';
+import { assigneeListSchema, taskBatchSchema, taskDetailSchema, taskEventSchema, taskItemSchema, taskListSchema } from '@linkloom/shared';
 
 @ApiTags('tasks')
 @ApiBearerAuth()
@@ -27,12 +29,14 @@ export class TasksController {
 
   @Get()
   @ApiZodQuery(listTasksQuerySchema)
+  @ApiZodResponse(taskListSchema)
   list(@CurrentUser() actor: AuthUser, @Query(new ZodPipe(listTasksQuerySchema)) query: ListTasksQuery) {
     return this.tasks.list(actor, query);
   }
 
   @Get('assignees')
   @MinRole('editor')
+  @ApiZodResponse(assigneeListSchema)
   assignees() {
     return this.tasks.assigneeOptions().then((items) => ({ items, total: items.length, page: 1, pageSize: items.length }));
   }
@@ -40,6 +44,7 @@ export class TasksController {
   @Post()
   @MinRole('editor')
   @ApiZodBody(createTaskSchema)
+  @ApiZodResponse(taskItemSchema, { status: 201 })
   create(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(createTaskSchema)) body: CreateTaskInput) {
     return this.creation.create(actor, body);
   }
@@ -47,11 +52,13 @@ export class TasksController {
   @Post('bulk')
   @MinRole('editor')
   @ApiZodBody(bulkCreateTasksSchema)
+  @ApiZodResponse(taskBatchSchema, { status: 201 })
   bulkCreate(@CurrentUser() actor: AuthUser, @Body(new ZodPipe(bulkCreateTasksSchema)) body: BulkCreateTasksInput) {
     return this.creation.createMany(actor, body).then((items) => ({ items }));
   }
 
   @Get(':taskId')
+  @ApiZodResponse(taskDetailSchema)
   get(@CurrentUser() actor: AuthUser, @Param('taskId', ParseUUIDPipe) id: string) {
     return this.tasks.get(actor, id);
   }
@@ -59,6 +66,7 @@ export class TasksController {
   @Patch(':taskId')
   @MinRole('writer')
   @ApiZodBody(updateTaskSchema)
+  @ApiZodResponse(taskItemSchema)
   update(
     @CurrentUser() actor: AuthUser,
     @Param('taskId', ParseUUIDPipe) id: string,
@@ -70,6 +78,7 @@ export class TasksController {
   @Post(':taskId/comments')
   @MinRole('writer')
   @ApiZodBody(commentSchema)
+  @ApiZodResponse(taskEventSchema, { status: 201 })
   comment(
     @CurrentUser() actor: AuthUser,
     @Param('taskId', ParseUUIDPipe) id: string,

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import { fakeFetch, renderWithProviders } from '../../testing/render.js';
-import { signInAs } from '../../testing/fixtures.js';
+import { docSet, signInAs } from '../../testing/fixtures.js';
 import { AppShell } from './app-shell.js';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -9,7 +9,7 @@ afterEach(() => vi.unstubAllGlobals());
 function api(demo: boolean) {
   return fakeFetch({
     'GET /api/health': () => ({ body: { status: 'ok', database: 'pglite', version: '0.1.0', demo } }),
-    'GET /api/doc-sets/d1': () => ({ body: { id: 'd1', name: 'Operator handbook', settings: {} } }),
+    'GET /api/doc-sets/d1': () => ({ body: docSet('d1', 'Operator handbook') }),
   });
 }
 

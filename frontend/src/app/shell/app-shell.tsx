@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { Link as RouterLink, Outlet, useParams } from 'react-router-dom';
+import { Link as RouterLink, Outlet, useParams } from 'react-router';
 import { Alert, Box, Divider, Drawer, LinearProgress, Toolbar, Typography } from '@mui/material';
 import { LogoMark } from '../../components/brand/logo-mark.js';
 import { adminNav, docSetNav, globalNav } from '../../config/navigation.js';
@@ -7,7 +7,7 @@ import { useSession } from '../../lib/session.js';
 import { useDocSet } from '../../features/doc-sets/api/get-doc-set.js';
 import { NavList } from './nav-list.js';
 import { UserMenu } from './user-menu.js';
-import { useHealth } from './get-health.js';
+import { useHealth } from '../../features/health/api/get-health.js';
 
 const DRAWER_WIDTH = 248;
 

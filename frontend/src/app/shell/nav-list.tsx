@@ -1,4 +1,4 @@
-import { NavLink, useLocation } from 'react-router-dom';
+import { NavLink, useLocation } from 'react-router';
 import { List, ListItemButton, ListItemIcon, ListItemText, ListSubheader } from '@mui/material';
 import { roleAtLeast, type Role } from '@linkloom/shared';
 import type { NavItem } from '../../config/navigation.js';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router';
 import { Avatar, Button, Divider, ListItemIcon, Menu, MenuItem, Typography } from '@mui/material';
 import KeyOutlined from '@mui/icons-material/KeyOutlined';
 import NotificationsOutlined from '@mui/icons-material/NotificationsOutlined';

@@ -1,8 +1,10 @@
-// Invented pages of a fictional bicycle-repair co-op handbook, for the page screens' tests.
-import type { PageDetail, PageRow } from './types.js';
+// Invented pages of a fictional bicycle-repair co-op handbook, for the page screens' tests; typed from the
+// shared schemas and parsed by them, so they look exactly like what the API client hands a screen.
+import { pageDetailSchema, runPageItemSchema, type PageDetail, type RunPageItem } from '@linkloom/shared';
+import { parsed } from '../../testing/fixtures.js';
 
-export function pageRow(path: string, overrides: Partial<PageRow> = {}): PageRow {
-  return {
+export function pageRow(path: string, overrides: Partial<RunPageItem> = {}): RunPageItem {
+  return parsed(runPageItemSchema, {
     path,
     title: path.replace(/\.md$/, '').split('/').pop() ?? path,
     stationaryScore: 0.01,
@@ -16,25 +18,26 @@ export function pageRow(path: string, overrides: Partial<PageRow> = {}): PageRow
     deadEnd: false,
     deep: false,
     island: false,
+    islandId: null,
     brokenLinkCount: 0,
     wordCount: 420,
     ...overrides,
-  };
+  });
 }
 
 export function pageDetail(path: string, overrides: Partial<PageDetail> = {}): PageDetail {
-  return {
+  return parsed(pageDetailSchema, {
     ...pageRow(path),
     inbound: [],
     outbound: [],
     brokenLinks: [],
     anchors: [],
+    headings: [],
+    frontMatter: {},
     unlinkedMentions: [],
     suggestedSources: [],
     scoreHistory: [],
-    frontMatter: {},
-    headings: [],
     neighbourhood: { nodes: [], edges: [] },
     ...overrides,
-  };
+  });
 }

@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { type SQL, sql } from 'drizzle-orm';
 import { DbService } from '../../../db/db.service.js';
-import { queryRows } from '../sql-values.js';
+import { LINK_TARGET_SOURCES } from '@linkloom/shared';
+import { pgArray, queryRows } from '../sql-values.js';
 
 export interface LinkRowView {
   sourcePath: string;
@@ -60,10 +61,39 @@ export class FindingsRepository {
       this.db,
       sql`select count(distinct coalesce(l.target_path, l.href)) as n from links l join pages p on p.id = l.source_page_id where ${where}`,
     );
+    const sources = await this.firstLinkPerSourcePage(
+      where,
+      rows.map((r) => r.targetPath),
+    );
     return {
-      rows: rows.map((r) => ({ targetPath: r.targetPath, linkCount: Number(r.linkCount), sourcePageCount: Number(r.sourcePageCount) })),
+      rows: rows.map((r) => ({
+        targetPath: r.targetPath,
+        linkCount: Number(r.linkCount),
+        sourcePageCount: Number(r.sourcePageCount),
+        sources: (sources.get(r.targetPath) ?? []).slice(0, LINK_TARGET_SOURCES),
+      })),
       total: Number(n),
     };
+  }
+
+  /** For each missing target, the first link from each page that points at it (the screen lists the pages; tasks go to them). */
+  private async firstLinkPerSourcePage(where: SQL, targets: string[]) {
+    const bySource = new Map<string, { sourcePath: string; line: number; column: number }[]>();
+    if (targets.length === 0) return bySource;
+    const rows = await queryRows<{ target: string; sourcePath: string; line: number; column: number }>(
+      this.db,
+      sql`select * from (select distinct on (coalesce(l.target_path, l.href), l.source_page_id)
+            coalesce(l.target_path, l.href) as target, p.path as "sourcePath", l.line, l."column"
+          from links l join pages p on p.id = l.source_page_id
+          where ${where} and coalesce(l.target_path, l.href) = any(${pgArray(targets)}::text[])
+          order by coalesce(l.target_path, l.href), l.source_page_id, l.line, l."column") x order by target, "sourcePath"`,
+    );
+    for (const { target, ...source } of rows) {
+      const list = bySource.get(target) ?? [];
+      if (list.length === 0) bySource.set(target, list);
+      list.push(source);
+    }
+    return bySource;
   }
 
   async islands(runId: string, offset: number, limit: number, pagesPerIsland = 200) {

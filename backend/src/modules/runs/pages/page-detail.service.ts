@@ -1,4 +1,5 @@
 import { Injectable } from '@nestjs/common';
+import { pageFlags } from '@linkloom/shared';
 import { notFound } from '../../../common/app-error.js';
 import type { RunRow } from '../../../db/schema/index.js';
 import { OnDemandSuggestionsService } from '../suggestions/on-demand-suggestions.service.js';
@@ -67,7 +68,7 @@ export class PageDetailService {
         path: n.path,
         title: n.title,
         stationaryScore: n.stationaryScore,
-        flags: flagsOf(n),
+        flags: pageFlags(n),
         distance: distance.get(n.pageId)!,
       }));
     const seen = new Set<string>();
@@ -76,14 +77,4 @@ export class PageDetailService {
       .map(([s, t]) => ({ source: byId.get(s)!.path, target: byId.get(t)!.path }));
     return { nodes, edges };
   }
-}
-
-export function flagsOf(item: PageItem): string[] {
-  const flags: string[] = [];
-  if (item.orphan) flags.push('orphan');
-  if (item.deadEnd) flags.push('dead-end');
-  if (!item.reachable) flags.push('unreachable');
-  if (item.deep) flags.push('deep');
-  if (item.island) flags.push('island');
-  return flags;
 }

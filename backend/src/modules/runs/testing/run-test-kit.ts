@@ -1,3 +1,4 @@
+import { runSchema, type Run } from '@linkloom/shared';
 import { DbService } from '../../../db/db.service.js';
 import type { TestApp } from '../../../testing/test-app.js';
 import { writeSnapshot, type FixtureLink, type FixturePage } from './snapshot-writer.js';
@@ -23,12 +24,12 @@ export async function startRun(t: TestApp, docSetId: string, settings?: Record<s
   return response.body.run.id as string;
 }
 
-export async function waitForRun(t: TestApp, docSetId: string, runId: string, timeoutMs = 60_000): Promise<Record<string, any>> {
+export async function waitForRun(t: TestApp, docSetId: string, runId: string, timeoutMs = 60_000): Promise<Run> {
   const token = await t.tokenFor('viewer');
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const response = await t.http.get(`/api/doc-sets/${docSetId}/runs/${runId}`).set('Authorization', `Bearer ${token}`);
-    if (response.body.status === 'finished' || response.body.status === 'failed') return response.body;
+    if (response.body.status === 'finished' || response.body.status === 'failed') return runSchema.parse(response.body);
     if (Date.now() > deadline) throw new Error(`run ${runId} still ${response.body.status}`);
     await new Promise((resolve) => setTimeout(resolve, 50));
   }

@@ -1,15 +1,10 @@
 import { useMutation } from '@tanstack/react-query';
+import { signInResultSchema, type SignInInput, type SignInResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { setSession } from '../../../lib/session.js';
-import type { SignInResult } from '../../../types/api.js';
-
-export interface SignInInput {
-  email: string;
-  password: string;
-}
 
 export function signIn(input: SignInInput): Promise<SignInResult> {
-  return apiFetch<SignInResult>('/auth/sign-in', { method: 'POST', body: input });
+  return apiFetch('/auth/sign-in', signInResultSchema, { method: 'POST', body: input });
 }
 
 export function useSignIn() {

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { noContentSchema } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { clearSession } from '../../../lib/session.js';
 
 export function signOut(): Promise<void> {
-  return apiFetch<void>('/auth/sign-out', { method: 'POST' });
+  return apiFetch('/auth/sign-out', noContentSchema, { method: 'POST' });
 }
 
 export function useSignOut() {

@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Stack, TextField } from '@mui/material';
 import { ApiError } from '../../../lib/api-client.js';
-import type { SignInInput } from '../api/sign-in.js';
+import type { SignInInput } from '@linkloom/shared';
 
 interface SignInFormProps {
   onSubmit: (input: SignInInput) => Promise<unknown>;

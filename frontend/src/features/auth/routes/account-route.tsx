@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Alert, Box, Button, Link, Paper, Stack, TextField, Typography } from '@mui/material';
 import { PageHeader } from '../../../components/ui/page-header.js';
 import { useNotifier } from '../../../components/ui/notifier.js';

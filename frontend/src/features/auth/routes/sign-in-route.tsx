@@ -1,4 +1,4 @@
-import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { Navigate, useNavigate, useSearchParams } from 'react-router';
 import { Box, Paper, Stack, Typography } from '@mui/material';
 import { LogoMark } from '../../../components/brand/logo-mark.js';
 import { useSession } from '../../../lib/session.js';

@@ -1,15 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { docSetSchema, type createDocSetSchema, type DocSet } from '@linkloom/shared';
+import type { z } from 'zod';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { DocSet } from '../../../types/api.js';
 import { docSetsQueryKey } from './get-doc-sets.js';
 
-export interface CreateDocSetInput {
-  name: string;
-  description?: string;
-}
-
-export function createDocSet(input: CreateDocSetInput): Promise<DocSet> {
-  return apiFetch<DocSet>('/doc-sets', { method: 'POST', body: input });
+export function createDocSet(input: z.input<typeof createDocSetSchema>): Promise<DocSet> {
+  return apiFetch('/doc-sets', docSetSchema, { method: 'POST', body: input });
 }
 
 export function useCreateDocSet() {

@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { createdApiTokenSchema, type CreatedApiToken } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { tokensQueryKey } from './get-tokens.js';
 
 /** The secret comes back once, here; the list never shows it again. */
-export function createToken(docSetId: string, name: string): Promise<{ token: string }> {
-  return apiFetch<{ token: string }>(`/doc-sets/${encodeURIComponent(docSetId)}/tokens`, { method: 'POST', body: { name } });
+export function createToken(docSetId: string, name: string): Promise<CreatedApiToken> {
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/tokens`, createdApiTokenSchema, { method: 'POST', body: { name } });
 }
 
 export function useCreateToken(docSetId: string) {

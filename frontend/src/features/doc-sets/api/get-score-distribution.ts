@@ -1,15 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { scoreDistributionSchema, type ScoreDistribution } from '@linkloom/shared';
 import { ApiError, apiFetch } from '../../../lib/api-client.js';
-import type { ScoreDistribution } from '../../../types/api.js';
 import { docSetQueryKey } from './get-doc-set.js';
 
-/**
- * `null` when the back end has no such route yet (404/501): the overview then simply leaves the chart out.
- */
+/** `null` when the server has no distribution for the run (404): the overview then simply leaves the chart out. */
 export async function getScoreDistribution(docSetId: string, runId: string, signal?: AbortSignal): Promise<ScoreDistribution | null> {
   try {
-    return await apiFetch<ScoreDistribution>(
+    return await apiFetch(
       `/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/score-distribution`,
+      scoreDistributionSchema,
       { signal },
     );
   } catch (error) {

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { snapshotSchema, type Snapshot } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Snapshot } from '../../../types/api.js';
 import { isSnapshotBusy, snapshotsQueryKey } from './get-snapshots.js';
 
 export function getSnapshot(docSetId: string, snapshotId: string, signal?: AbortSignal): Promise<Snapshot> {
-  return apiFetch<Snapshot>(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots/${encodeURIComponent(snapshotId)}`, { signal });
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots/${encodeURIComponent(snapshotId)}`, snapshotSchema, { signal });
 }
 
 export function snapshotQueryOptions(docSetId: string, snapshotId: string) {

@@ -1,16 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { snapshotListSchema, type Snapshot } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult, Snapshot } from '../../../types/api.js';
 import { docSetQueryKey } from './get-doc-set.js';
 
 export const snapshotsQueryKey = (docSetId: string) => [...docSetQueryKey(docSetId), 'snapshots'] as const;
 
 export async function getSnapshots(docSetId: string, signal?: AbortSignal): Promise<Snapshot[]> {
-  const result = await apiFetch<ListResult<Snapshot> | Snapshot[]>(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots`, {
+  const result = await apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots`, snapshotListSchema, {
     query: { page: 1, pageSize: 100 },
     signal,
   });
-  return Array.isArray(result) ? result : result.items;
+  return result.items;
 }
 
 export const isSnapshotBusy = (s: Pick<Snapshot, 'status'>) => s.status === 'received' || s.status === 'importing';

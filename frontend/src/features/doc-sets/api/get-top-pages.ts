@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { runPageListSchema, type RunPageList } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult, PageItem } from '../../../types/api.js';
 import { docSetQueryKey } from './get-doc-set.js';
 
-export function getTopPages(docSetId: string, runId: string, limit: number, signal?: AbortSignal): Promise<ListResult<PageItem>> {
-  return apiFetch<ListResult<PageItem>>(`/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/pages`, {
+export function getTopPages(docSetId: string, runId: string, limit: number, signal?: AbortSignal): Promise<RunPageList> {
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/runs/${encodeURIComponent(runId)}/pages`, runPageListSchema, {
     query: { sort: '-stationaryScore', page: 1, pageSize: limit },
     signal,
   });

@@ -1,17 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { docSetSchema, type DocSet, type UpdateDocSetInput } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { DocSet, DocSetSettings } from '../../../types/api.js';
 import { docSetQueryKey } from './get-doc-set.js';
 import { docSetsQueryKey } from './get-doc-sets.js';
 
-export interface UpdateDocSetInput {
-  name?: string;
-  description?: string;
-  settings?: Partial<DocSetSettings>;
-}
-
 export function updateDocSet(docSetId: string, input: UpdateDocSetInput): Promise<DocSet> {
-  return apiFetch<DocSet>(`/doc-sets/${encodeURIComponent(docSetId)}`, { method: 'PATCH', body: input });
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}`, docSetSchema, { method: 'PATCH', body: input });
 }
 
 export function useUpdateDocSet(docSetId: string) {

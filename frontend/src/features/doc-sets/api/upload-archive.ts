@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { snapshotAcceptedSchema, type Snapshot } from '@linkloom/shared';
 import { apiUpload } from '../../../lib/api-client.js';
-import type { Snapshot } from '../../../types/api.js';
 import { snapshotsQueryKey } from './get-snapshots.js';
 
 export function uploadArchive(docSetId: string, file: File, onProgress?: (fraction: number) => void): Promise<{ snapshot: Snapshot }> {
   const form = new FormData();
   form.append('archive', file, file.name);
-  return apiUpload<{ snapshot: Snapshot }>(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots`, form, onProgress);
+  return apiUpload(`/doc-sets/${encodeURIComponent(docSetId)}/snapshots`, snapshotAcceptedSchema, form, onProgress);
 }
 
 export function useUploadArchive(docSetId: string, onProgress: (fraction: number) => void) {

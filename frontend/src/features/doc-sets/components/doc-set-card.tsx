@@ -1,7 +1,7 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Box, Card, CardActionArea, CardContent, Chip, Skeleton, Typography } from '@mui/material';
 import { SparkLineChart } from '@mui/x-charts/SparkLineChart';
-import type { DocSet } from '../../../types/api.js';
+import type { DocSet } from '@linkloom/shared';
 import { isRunBusy, latestFinished, useRuns } from '../../runs/api/get-runs.js';
 import { brand } from '../../../lib/theme.js';
 import { CountChange } from './count-change.js';

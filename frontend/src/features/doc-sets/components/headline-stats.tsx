@@ -1,7 +1,7 @@
 import { Box } from '@mui/material';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router';
 import { StatCard } from '../../../components/ui/stat-card.js';
-import type { Run } from '../../../types/api.js';
+import type { Run } from '@linkloom/shared';
 import { HEADLINES } from './overview-model.js';
 
 /** Where a headline count leads: the findings view listing those pages or links. */

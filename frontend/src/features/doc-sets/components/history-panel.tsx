@@ -1,7 +1,7 @@
 import { LinearProgress, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
-import type { Run } from '../../../types/api.js';
+import type { Run } from '@linkloom/shared';
 import { useSnapshots } from '../api/get-snapshots.js';
 import { StatusChip } from './status-chip.js';
 

@@ -1,5 +1,5 @@
 import { Alert, Box, List, ListItem, ListItemText, Typography } from '@mui/material';
-import type { Snapshot } from '../../../types/api.js';
+import type { Snapshot } from '@linkloom/shared';
 
 /** What an import found, with each warning named by file so a writer can fix it. */
 export function ImportReport({ snapshot }: { snapshot: Snapshot }) {

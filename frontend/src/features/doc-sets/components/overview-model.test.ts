@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Run } from '../../../types/api.js';
+import type { Run } from '@linkloom/shared';
 import { concentrationCurve, topShareSentence, trendRuns } from './overview-model.js';
 
 describe('concentrationCurve', () => {

@@ -4,7 +4,7 @@
  * concentration of wealth", Publications of the American Statistical Association 9(70), 1905): after sorting
  * pages by stationary score, descending, it plots the share of all score held by the top x% of pages.
  */
-import type { Run, RunCounts, ScoreDistribution } from '../../../types/api.js';
+import type { Run, RunCounts, ScoreDistribution } from '@linkloom/shared';
 
 export interface Headline {
   key: keyof RunCounts;

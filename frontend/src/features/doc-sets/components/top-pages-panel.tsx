@@ -1,4 +1,4 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Link, List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Paper, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { LineChart } from '@mui/x-charts/LineChart';
-import type { Run } from '../../../types/api.js';
+import type { Run } from '@linkloom/shared';
 import { chartColors } from '../../../lib/theme.js';
 import { HEADLINES, trendRuns } from './overview-model.js';
 

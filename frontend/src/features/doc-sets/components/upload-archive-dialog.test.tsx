@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { act, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { signInAs, snapshot } from '../../../testing/fixtures.js';
 import { UploadArchiveDialog } from './upload-archive-dialog.js';
 
 /** Stands in for XMLHttpRequest so the test can drive upload progress by hand. */
@@ -34,17 +34,8 @@ describe('upload archive', () => {
   it('shows real upload progress, then import progress, then the import report', async () => {
     signInAs('editor');
     vi.stubGlobal('XMLHttpRequest', FakeXhr);
-    let snapshot: Record<string, unknown> = {
-      id: 's1',
-      status: 'importing',
-      progress: { done: 3, total: 12 },
-      warnings: [],
-      error: null,
-      pageCount: null,
-      linkCount: null,
-      assetCount: null,
-    };
-    vi.stubGlobal('fetch', fakeFetch({ 'GET /api/doc-sets/d1/snapshots/s1': () => ({ body: snapshot }) }).fn);
+    let shown = snapshot('s1', { status: 'importing', progress: { done: 3, total: 12 } });
+    vi.stubGlobal('fetch', fakeFetch({ 'GET /api/doc-sets/d1/snapshots/s1': () => ({ body: shown }) }).fn);
     renderWithProviders(<UploadArchiveDialog docSetId="d1" open onClose={() => undefined} />);
 
     const file = new File(['PK'], 'handbook.zip', { type: 'application/zip' });
@@ -57,14 +48,13 @@ describe('upload archive', () => {
     act(() => xhr.upload.onprogress!({ lengthComputable: true, loaded: 40, total: 100 }));
     expect(screen.getByText('Uploading… 40%')).toBeTruthy();
 
-    snapshot = { ...snapshot };
     xhr.status = 202;
-    xhr.responseText = JSON.stringify({ snapshot });
+    xhr.responseText = JSON.stringify({ snapshot: shown });
     act(() => xhr.onload!());
     expect(await screen.findByText('Importing… 3 of 12 files')).toBeTruthy();
 
-    snapshot = {
-      ...snapshot,
+    shown = {
+      ...shown,
       status: 'ready',
       progress: { done: 12, total: 12 },
       pageCount: 10,

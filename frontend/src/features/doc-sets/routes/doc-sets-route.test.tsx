@@ -1,38 +1,29 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import type { TaskItem } from '@linkloom/shared';
+import { docSet, pagedList, signInAs, task } from '../../../testing/fixtures.js';
 import DocSetsRoute from './doc-sets-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const item = (id: string, title: string, outcome: 'reopened' | null) => ({
-  id,
-  docSetId: 'd1',
-  docSetName: 'Harbour guides',
-  pagePath: `${id}.md`,
-  kind: 'repair-broken-links',
-  title,
-  details: '',
-  finding: {},
-  assignee: { id: 'u1', name: 'Ada', email: 'ada@example.test' },
-  priority: 'normal',
-  dueDate: null,
-  overdue: false,
-  status: 'open',
-  verification: null,
-  verifiedAt: null,
-  check: outcome ? { runId: 'r5', runNumber: 5, at: '2026-12-02T02:00:00Z', outcome, items: [] } : null,
-  createdAt: '2026-12-01T10:00:00Z',
-  updatedAt: '2026-12-01T10:00:00Z',
-});
+// Tasks and doc sets as the server answers them, parsed by the shared schemas like real answers.
+const item = (id: string, title: string, outcome: 'reopened' | null) =>
+  task(id, {
+    docSetName: 'Harbour guides',
+    pagePath: `${id}.md`,
+    kind: 'repair-broken-links',
+    title,
+    assignee: { id: 'u1', name: 'Ada', email: 'ada@example.test' },
+    check: outcome ? { runId: 'r5', runNumber: 5, at: '2026-12-02T02:00:00Z', outcome, items: [] } : null,
+  });
 
-function api(tasks: unknown[]) {
+function api(tasks: TaskItem[]) {
   return fakeFetch({
     'GET /api/doc-sets': () => ({
-      body: { items: [{ id: 'd1', name: 'Harbour guides', settings: {} }], total: 1, page: 1, pageSize: 500 },
+      body: pagedList([docSet('d1', 'Harbour guides')], 1, 500),
     }),
-    'GET /api/tasks': () => ({ body: { items: tasks, total: tasks.length, page: 1, pageSize: 50 } }),
+    'GET /api/tasks': () => ({ body: pagedList(tasks) }),
   });
 }
 

@@ -1,17 +1,18 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { counts, run, signInAs } from '../../../testing/fixtures.js';
+import type { Run } from '@linkloom/shared';
+import { counts, docSet, pagedList, run, signInAs } from '../../../testing/fixtures.js';
 import OverviewRoute from './overview-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
-function api(runs: unknown[], distributionStatus = 404) {
+function api(runs: Run[], distributionStatus = 404) {
   return fakeFetch({
-    'GET /api/doc-sets/d1': () => ({ body: { id: 'd1', name: 'Operator handbook', settings: {} } }),
-    'GET /api/doc-sets/d1/runs': () => ({ body: { items: runs, total: runs.length, page: 1, pageSize: 500 } }),
-    'GET /api/doc-sets/d1/snapshots': () => ({ body: { items: [], total: 0, page: 1, pageSize: 100 } }),
-    'GET /api/doc-sets/d1/runs/r2/pages': () => ({ body: { items: [], total: 0, page: 1, pageSize: 10 } }),
+    'GET /api/doc-sets/d1': () => ({ body: docSet('d1', 'Operator handbook') }),
+    'GET /api/doc-sets/d1/runs': () => ({ body: pagedList(runs, 1, 500) }),
+    'GET /api/doc-sets/d1/snapshots': () => ({ body: pagedList([], 1, 100) }),
+    'GET /api/doc-sets/d1/runs/r2/pages': () => ({ body: { ...pagedList([], 1, 10), runId: 'r2' } }),
     'GET /api/doc-sets/d1/runs/r2/score-distribution': () => ({
       status: distributionStatus,
       body: { statusCode: distributionStatus, code: 'NOT_FOUND', message: 'no' },

@@ -1,19 +1,21 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { defaultDocSetSettings } from '@linkloom/shared';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { docSet, pagedList, run, signInAs } from '../../../testing/fixtures.js';
 import SettingsRoute from './settings-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
 function api() {
   return fakeFetch({
-    'GET /api/doc-sets/d1': () => ({ body: { id: 'd1', name: 'Operator handbook', settings: defaultDocSetSettings() } }),
-    'PATCH /api/doc-sets/d1': () => ({ body: { id: 'd1', name: 'Operator handbook', settings: defaultDocSetSettings() } }),
-    'POST /api/doc-sets/d1/runs': () => ({ status: 202, body: { run: { id: 'r9', status: 'queued' } } }),
-    'GET /api/doc-sets/d1/tokens': () => ({ body: [] }),
+    'GET /api/doc-sets/d1': () => ({ body: docSet('d1', 'Operator handbook') }),
+    'PATCH /api/doc-sets/d1': () => ({ body: docSet('d1', 'Operator handbook') }),
+    'POST /api/doc-sets/d1/runs': () => ({
+      status: 202,
+      body: { run: run('r9', 9, { status: 'queued', counts: null, finishedAt: null }) },
+    }),
+    'GET /api/doc-sets/d1/tokens': () => ({ body: pagedList([]) }),
   });
 }
 

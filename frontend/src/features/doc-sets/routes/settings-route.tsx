@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { useNavigate, useParams } from 'react-router';
 import { Alert, Box, Button, Stack } from '@mui/material';
 import { defaultDocSetSettings } from '@linkloom/shared';
 import { PageHeader } from '../../../components/ui/page-header.js';

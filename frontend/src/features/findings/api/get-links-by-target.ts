@@ -1,9 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { ListResult } from '@linkloom/shared';
+import { linkTargetGroupListSchema, type LinkTargetGroup, type ListResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
-import type { LinkTargetGroup } from '../types.js';
+import { runPath } from '../../../lib/run-path.js';
 import { linksQueryParams, type LinksQuery } from './get-links.js';
 
 /** The same links, one row per missing target with the pages that point at it. */
@@ -13,7 +12,7 @@ export function getLinksByTarget(
   query: LinksQuery,
   signal?: AbortSignal,
 ): Promise<ListResult<LinkTargetGroup>> {
-  return apiFetch<ListResult<LinkTargetGroup>>(`${runPath(docSetId, runId)}/links`, { query: linksQueryParams(query, 'target'), signal });
+  return apiFetch(`${runPath(docSetId, runId)}/links`, linkTargetGroupListSchema, { query: linksQueryParams(query, 'target'), signal });
 }
 
 export function linksByTargetQueryOptions(docSetId: string, runId: string, query: LinksQuery) {

@@ -1,24 +1,22 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { ListResult } from '@linkloom/shared';
+import { linkListSchema, type LinkItem, type LinkStatus, type ListResult } from '@linkloom/shared';
 import { apiFetch, type Query } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
-import type { LinkRow, LinkStatus } from '../types.js';
+import { runPath } from '../../../lib/run-path.js';
 
+/** The links route filters by status and pages; it has no sort keys (links come in page, line order). */
 export interface LinksQuery {
   status: LinkStatus;
   page: number;
   pageSize: number;
-  sort?: string;
-  q?: string;
 }
 
 export function linksQueryParams(query: LinksQuery, groupBy?: 'target'): Query {
-  return { status: query.status, page: query.page, pageSize: query.pageSize, sort: query.sort, q: query.q, groupBy };
+  return { status: query.status, page: query.page, pageSize: query.pageSize, groupBy };
 }
 
-export function getLinks(docSetId: string, runId: string, query: LinksQuery, signal?: AbortSignal): Promise<ListResult<LinkRow>> {
-  return apiFetch<ListResult<LinkRow>>(`${runPath(docSetId, runId)}/links`, { query: linksQueryParams(query), signal });
+export function getLinks(docSetId: string, runId: string, query: LinksQuery, signal?: AbortSignal): Promise<ListResult<LinkItem>> {
+  return apiFetch(`${runPath(docSetId, runId)}/links`, linkListSchema, { query: linksQueryParams(query), signal });
 }
 
 export function linksQueryOptions(docSetId: string, runId: string, query: LinksQuery) {

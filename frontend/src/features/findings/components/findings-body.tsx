@@ -1,5 +1,5 @@
 import { Box, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
-import type { RunFindingCounts } from '../../pages/api/get-run.js';
+import type { RunCounts } from '@linkloom/shared';
 import type { FindingsTableState } from './findings-table-props.js';
 import type { FindingsView, SubKind } from './findings-views.js';
 import { IslandsList } from './islands-list.js';
@@ -14,7 +14,7 @@ interface FindingsBodyProps {
   runId: string;
   view: FindingsView;
   kind: SubKind;
-  counts: RunFindingCounts | null | undefined;
+  counts: RunCounts | null | undefined;
   grouping: LinkGrouping;
   table: FindingsTableState;
   onKindChange: (kind: string) => void;

@@ -1,6 +1,6 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Chip, List, ListItemButton, ListItemText, Paper, Skeleton } from '@mui/material';
-import type { RunFindingCounts } from '../../pages/api/get-run.js';
+import type { RunCounts } from '@linkloom/shared';
 import { FINDINGS_VIEWS, viewCount, type FindingsViewId } from './findings-views.js';
 
 const nf = new Intl.NumberFormat();
@@ -8,7 +8,7 @@ const nf = new Intl.NumberFormat();
 interface FindingsNavProps {
   docSetId: string;
   current: FindingsViewId;
-  counts: RunFindingCounts | null | undefined;
+  counts: RunCounts | null | undefined;
   loading: boolean;
   /** Kept when switching views, so a chosen run stays chosen. */
   search: string;

@@ -1,8 +1,6 @@
 // Pure description of the findings views: which need each serves, where its count comes from in the run's
 // counts, and which sub-kinds it offers. The route and the side list both read this table.
-import type { RunFindingCounts } from '../../pages/api/get-run.js';
-import type { PageFlag, PageRow } from '../../pages/types.js';
-import type { LinkStatus } from '../types.js';
+import type { LinkStatus, PageFlag, RunCounts, RunPageItem } from '@linkloom/shared';
 
 export type FindingsViewId = 'needs-links' | 'dead-ends' | 'broken-links' | 'unsafe-ambiguous' | 'islands';
 
@@ -12,7 +10,7 @@ export interface SubKind {
   /** Pages views filter by flag, links views by status. */
   flag?: PageFlag;
   status?: LinkStatus;
-  count: (c: RunFindingCounts) => number;
+  count: (c: RunCounts) => number;
 }
 
 export interface FindingsView {
@@ -92,12 +90,12 @@ export function resolveView(param: string | undefined, kindParam: string): { vie
   return { view, kind };
 }
 
-export function viewCount(view: FindingsView, counts: RunFindingCounts): number {
+export function viewCount(view: FindingsView, counts: RunCounts): number {
   return view.kinds.reduce((sum, k) => sum + k.count(counts), 0);
 }
 
 /** Why a page is listed under a pages view, in a sentence a writer can act on. */
-export function pageReason(row: PageRow, flag: PageFlag | undefined): string {
+export function pageReason(row: RunPageItem, flag: PageFlag | undefined): string {
   switch (flag) {
     case 'orphan':
       return 'No other page links here.';

@@ -1,27 +1,28 @@
 import { useMemo } from 'react';
 import type { ColumnDef } from '@tanstack/react-table';
 import { Chip, Link, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
 import { pageDetailHref } from '../../pages/components/format.js';
 import { RawHref } from '../../pages/components/broken-links-panel.js';
 import { useLinks } from '../api/get-links.js';
-import type { LinkRow, LinkStatus } from '../types.js';
+import type { LinkItem, LinkStatus } from '@linkloom/shared';
 import { BulkActionBar } from './bulk-action-bar.js';
 import { downloadCsv, toCsv } from './csv.js';
 import type { FindingsTableProps } from './findings-table-props.js';
 import { useRowSelection } from './use-row-selection.js';
 
-export const linkId = (l: LinkRow) => `${l.sourcePath}:${l.line}:${l.column}`;
+export const linkId = (l: LinkItem) => `${l.sourcePath}:${l.line}:${l.column}`;
 
-function columns(docSetId: string, runId: string): ColumnDef<LinkRow>[] {
+function columns(docSetId: string, runId: string): ColumnDef<LinkItem>[] {
   return [
     {
       id: 'sourcePath',
       header: 'On page',
       accessorKey: 'sourcePath',
       enableHiding: false,
+      enableSorting: false,
       cell: ({ row }) => (
         <Link component={RouterLink} to={pageDetailHref(docSetId, row.original.sourcePath, runId)}>
           {row.original.sourcePath}
@@ -67,11 +68,11 @@ function columns(docSetId: string, runId: string): ColumnDef<LinkRow>[] {
   ];
 }
 
-/** Links of one status, one row per link, in the server's order (by page); only the page column re-sorts, as
- * the contract lists no other sort keys for links. */
+/** Links of one status, one row per link, in the server's order (by page, then line): the links route has no
+ * sort keys, so no column offers to sort. */
 export function LinkFindingsTable({ docSetId, runId, kind, table, label }: FindingsTableProps) {
   const status = kind.status as LinkStatus;
-  const links = useLinks(docSetId, runId, { status, page: table.page, pageSize: table.pageSize, sort: table.sort });
+  const links = useLinks(docSetId, runId, { status, page: table.page, pageSize: table.pageSize });
   const selection = useRowSelection(linkId);
   const cols = useMemo(() => columns(docSetId, runId), [docSetId, runId]);
   const exportSelected = () =>
@@ -79,12 +80,12 @@ export function LinkFindingsTable({ docSetId, runId, kind, table, label }: Findi
       `${status}-links.csv`,
       toCsv(
         ['sourcePath', 'line', 'column', 'href', 'targetPath', 'anchor', 'status', 'reason'],
-        selection.rows.map((l) => [l.sourcePath, l.line, l.column, l.href ?? '', l.targetPath, l.anchor, l.status, l.reason]),
+        selection.rows.map((l) => [l.sourcePath, l.line, l.column, l.hrefText, l.targetPath, l.anchor, l.status, l.reason]),
       ),
     );
   // A task holds exactly the selected links; only broken links and anchors are fix tasks of this kind.
   const repairable = status === 'broken' || status === 'broken-anchor';
-  const selected = selection.rows.map((l) => ({ sourcePath: l.sourcePath, href: l.hrefText ?? l.href ?? '', line: l.line }));
+  const selected = selection.rows.map((l) => ({ sourcePath: l.sourcePath, href: l.hrefText, line: l.line }));
   const pagePaths = [...new Set(selected.map((l) => l.sourcePath))];
   const taskRequest = repairable ? { kind: 'repair-broken-links' as const, pagePaths, links: selected } : null;
   return (

@@ -1,13 +1,13 @@
 import { useMemo } from 'react';
 import type { ColumnDef } from '@tanstack/react-table';
 import { Link, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
 import { usePages } from '../../pages/api/get-pages.js';
 import { formatCount, formatScore, pageDetailHref } from '../../pages/components/format.js';
 import type { FixTaskKind } from '../../pages/components/work-hook-dialog.js';
-import type { PageFlag, PageRow } from '../../pages/types.js';
+import type { PageFlag, RunPageItem } from '@linkloom/shared';
 import { BulkActionBar } from './bulk-action-bar.js';
 import { downloadCsv, toCsv } from './csv.js';
 import { pageReason } from './findings-views.js';
@@ -21,9 +21,9 @@ const TASK_FOR_FLAG: Record<PageFlag, FixTaskKind> = {
   'dead-end': 'add-outbound-links',
   island: 'make-reachable',
 };
-const pagePath = (row: PageRow) => row.path;
+const pagePath = (row: RunPageItem) => row.path;
 
-function columns(docSetId: string, runId: string, flag: PageFlag): ColumnDef<PageRow>[] {
+function columns(docSetId: string, runId: string, flag: PageFlag): ColumnDef<RunPageItem>[] {
   return [
     {
       id: 'path',

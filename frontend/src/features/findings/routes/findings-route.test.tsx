@@ -2,7 +2,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { linkItemSchema, linkListSchema, linkTargetGroupListSchema, runPageListSchema } from '@linkloom/shared';
+import { pagedList, parsed, run, signInAs } from '../../../testing/fixtures.js';
 import { pageRow } from '../../pages/testing-fixtures.js';
 import FindingsRoute from './findings-route.js';
 
@@ -27,70 +28,64 @@ const COUNTS = {
   islands: 1,
 };
 
+const BROKEN_LINK = parsed(linkItemSchema, {
+  sourcePath: 'index.md',
+  line: 4,
+  column: 7,
+  href: './gears/derailleur.md',
+  hrefText: './gears/derailleur.md',
+  targetPath: 'gears/derailleur.md',
+  anchor: null,
+  kind: 'inline',
+  status: 'broken',
+  reason: 'No such page',
+});
+
+// The server withholds an unsafe href as a link (`href: null`) and sends the text to show.
+const UNSAFE_LINK = parsed(linkItemSchema, {
+  sourcePath: 'tools.md',
+  line: 12,
+  column: 3,
+  href: null,
+  hrefText: 'javascript:alert(1)',
+  targetPath: null,
+  anchor: null,
+  kind: 'inline',
+  status: 'unsafe',
+  reason: 'Runs script when clicked',
+});
+
 function api() {
   return fakeFetch({
-    'GET /api/doc-sets/d1/runs/latest': () => ({ body: { id: 'r7', status: 'finished', counts: COUNTS } }),
+    'GET /api/doc-sets/d1/runs/latest': () => ({ body: run('r7', 7, { counts: COUNTS }) }),
     'GET /api/doc-sets/d1/runs/latest/pages': (url) => ({
-      body:
-        url.searchParams.get('flags') === 'deep'
-          ? { items: [pageRow('gears/hub-service.md', { deep: true, depth: 6 })], total: 1, page: 1, pageSize: 50 }
-          : { items: [pageRow('gears/cables.md', { orphan: true, inboundCount: 0 })], total: 1, page: 1, pageSize: 50 },
+      body: parsed(runPageListSchema, {
+        ...pagedList([
+          url.searchParams.get('flags') === 'deep'
+            ? pageRow('gears/hub-service.md', { deep: true, depth: 6 })
+            : pageRow('gears/cables.md', { orphan: true, inboundCount: 0 }),
+        ]),
+        runId: 'r7',
+      }),
     }),
     'GET /api/doc-sets/d1/runs/latest/links': (url) => ({
       body:
         url.searchParams.get('groupBy') === 'target'
-          ? {
-              items: [
+          ? parsed(linkTargetGroupListSchema, {
+              ...pagedList([
                 {
                   targetPath: 'gears/derailleur.md',
-                  count: 2,
+                  linkCount: 3,
+                  sourcePageCount: 2,
                   sources: [
-                    { sourcePath: 'index.md', line: 4 },
-                    { sourcePath: 'gears/cables.md', line: 9 },
+                    { sourcePath: 'index.md', line: 4, column: 7 },
+                    { sourcePath: 'gears/cables.md', line: 9, column: 1 },
                   ],
                 },
-              ],
-              total: 1,
-              page: 1,
-              pageSize: 50,
-            }
-          : url.searchParams.get('status') === 'unsafe'
-            ? {
-                items: [
-                  {
-                    sourcePath: 'tools.md',
-                    line: 12,
-                    column: 3,
-                    href: 'javascript:alert(1)',
-                    targetPath: null,
-                    anchor: null,
-                    kind: 'inline',
-                    status: 'unsafe',
-                    reason: 'Runs script when clicked',
-                  },
-                ],
-                total: 1,
-                page: 1,
-                pageSize: 50,
-              }
-            : {
-                items: [
-                  {
-                    sourcePath: 'index.md',
-                    line: 4,
-                    column: 7,
-                    href: './gears/derailleur.md',
-                    targetPath: 'gears/derailleur.md',
-                    anchor: null,
-                    kind: 'inline',
-                    status: 'broken',
-                    reason: 'No such page',
-                  },
-                ],
-                total: 1,
-                page: 1,
-                pageSize: 50,
-              },
+              ]),
+              groupBy: 'target',
+            })
+          : parsed(linkListSchema, pagedList([url.searchParams.get('status') === 'unsafe' ? UNSAFE_LINK : BROKEN_LINK])),
     }),
   });
 }
@@ -133,6 +128,7 @@ describe('findings', () => {
     expect(screen.getByRole('button', { name: 'Missing anchor (2)' })).toBeTruthy();
     await user.click(screen.getByRole('button', { name: 'By missing target' }));
     expect(await screen.findByText('index.md:4, gears/cables.md:9')).toBeTruthy();
+    expect(screen.getByRole('cell', { name: '3' })).toBeTruthy();
     expect(router.state.location.search).toContain('group=target');
   });
 

@@ -1,4 +1,4 @@
-import { useParams } from 'react-router-dom';
+import { useParams } from 'react-router';
 import { Box } from '@mui/material';
 import { PageHeader } from '../../../components/ui/page-header.js';
 import { useUrlState } from '../../../components/ui/use-url-state.js';

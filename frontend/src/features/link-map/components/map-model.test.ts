@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { edgeWidth, findNode, folderCrumbs, mapElements } from './map-model.js';
-import type { MapGraph } from '../types.js';
+import type { LinkMap } from '@linkloom/shared';
 
-const graph: MapGraph = {
+const graph: LinkMap = {
+  runId: 'r1',
   level: 'folders',
+  folder: '',
+  totalPages: 45,
   nodes: [
     { id: 'guides', label: 'guides', path: 'guides', size: 40, stationaryScore: 0.6, pageCount: 40, flags: [] },
     { id: 'archive', label: 'archive', path: 'archive', size: 5, stationaryScore: 0.1, pageCount: 5, flags: ['orphan'] },

@@ -1,7 +1,7 @@
 // Pure preparation of the link map: cytoscape elements (size by score, fill by finding, edge width by link
 // count) and the folder breadcrumb. No React and no cytoscape here.
 import { findingColour, nodeSize } from '../../pages/components/finding-colours.js';
-import type { MapGraph, MapNode } from '../types.js';
+import type { LinkMap, LinkMapNode } from '@linkloom/shared';
 
 export interface MapElement {
   group: 'nodes' | 'edges';
@@ -14,11 +14,11 @@ export function edgeWidth(weight: number, maxWeight: number): number {
   return Math.round((1 + 5 * (Math.log(weight) / Math.log(maxWeight))) * 10) / 10;
 }
 
-export function nodeLabel(node: MapNode): string {
+export function nodeLabel(node: LinkMapNode): string {
   return node.pageCount != null ? `${node.label} (${node.pageCount})` : node.label;
 }
 
-export function mapElements(graph: MapGraph): MapElement[] {
+export function mapElements(graph: LinkMap): MapElement[] {
   const maxScore = Math.max(0, ...graph.nodes.map((n) => n.stationaryScore));
   const maxWeight = Math.max(1, ...graph.edges.map((e) => e.weight));
   const ids = new Set(graph.nodes.map((n) => n.id));
@@ -48,7 +48,7 @@ export function folderCrumbs(folder: string): Crumb[] {
 }
 
 /** The first node whose label or path holds the words, case-insensitive; null when none does. */
-export function findNode(nodes: MapNode[], words: string): MapNode | null {
+export function findNode(nodes: LinkMapNode[], words: string): LinkMapNode | null {
   const needle = words.trim().toLowerCase();
   if (!needle) return null;
   return nodes.find((n) => n.label.toLowerCase().includes(needle) || n.path.toLowerCase().includes(needle)) ?? null;

@@ -1,7 +1,7 @@
 import { Button, Link, Table, TableBody, TableCell, TableHead, TableRow } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { formatScore, pageDetailHref } from '../../pages/components/format.js';
-import type { MapNode } from '../types.js';
+import type { LinkMapNode } from '@linkloom/shared';
 
 /** The map's nodes as a table, highest score first: the same click-through, by keyboard or screen reader. */
 export function MapNodeList({
@@ -10,7 +10,7 @@ export function MapNodeList({
   runId,
   onOpenFolder,
 }: {
-  nodes: MapNode[];
+  nodes: LinkMapNode[];
   docSetId: string;
   runId: string;
   onOpenFolder: (path: string) => void;

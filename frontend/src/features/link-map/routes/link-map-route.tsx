@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { useNavigate, useParams } from 'react-router';
 import { Alert, AlertTitle, Paper, Stack, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import type { ElementDefinition, LayoutOptions } from 'cytoscape';
 import { PageHeader } from '../../../components/ui/page-header.js';

@@ -1,14 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { mailboxMessageSchema, type MailboxMessage } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import { mailQueryKey, type MailboxMessageSummary } from './get-mailbox.js';
-
-export interface MailboxMessage extends MailboxMessageSummary {
-  text: string | null;
-  html: string | null;
-}
+import { mailQueryKey } from './get-mailbox.js';
 
 export function getMailboxMessage(id: string, signal?: AbortSignal): Promise<MailboxMessage> {
-  return apiFetch<MailboxMessage>(`/mail/${encodeURIComponent(id)}`, { signal });
+  return apiFetch(`/mail/${encodeURIComponent(id)}`, mailboxMessageSchema, { signal });
 }
 
 export function mailboxMessageQueryOptions(id: string) {

@@ -4,7 +4,8 @@ import { Alert, AlertTitle, Box, Typography } from '@mui/material';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
 import { ApiError } from '../../../lib/api-client.js';
-import { useMailbox, type MailboxMessageSummary } from '../api/get-mailbox.js';
+import type { MailboxMessageSummary } from '@linkloom/shared';
+import { useMailbox } from '../api/get-mailbox.js';
 import { MessageReader } from './message-reader.js';
 
 interface MailboxPanelProps {

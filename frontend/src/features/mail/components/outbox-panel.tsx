@@ -2,7 +2,8 @@ import type { ColumnDef } from '@tanstack/react-table';
 import { Chip, Stack, Typography } from '@mui/material';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
-import { OUTBOX_STATUSES, useOutbox, type OutboxMessage, type OutboxStatus } from '../api/get-outbox.js';
+import { OUTBOX_STATUSES, type OutboxMessage, type OutboxStatus } from '@linkloom/shared';
+import { useOutbox } from '../api/get-outbox.js';
 
 interface OutboxPanelProps {
   status: OutboxStatus | '';

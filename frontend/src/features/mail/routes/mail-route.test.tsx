@@ -2,7 +2,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { mailboxMessageSchema } from '@linkloom/shared';
+import { parsed, signInAs } from '../../../testing/fixtures.js';
 import MailRoute from './mail-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -21,7 +22,9 @@ const summary = {
 function api(mailbox: () => { status?: number; body?: unknown } = () => ({ body: { items: [summary], total: 1, page: 1, pageSize: 25 } })) {
   return fakeFetch({
     'GET /api/mail': mailbox,
-    'GET /api/mail/m1': () => ({ body: { ...summary, text: 'Plain digest: 3 broken links fixed.', html: hostileHtml } }),
+    'GET /api/mail/m1': () => ({
+      body: parsed(mailboxMessageSchema, { ...summary, headers: {}, text: 'Plain digest: 3 broken links fixed.', html: hostileHtml }),
+    }),
     'GET /api/outbox': (url) => ({
       body: {
         items:
@@ -35,8 +38,9 @@ function api(mailbox: () => { status?: number; body?: unknown } = () => ({ body:
                   subject: 'Nightly digest',
                   status: 'failed',
                   attempts: 8,
-                  nextAttemptAt: null,
+                  nextAttemptAt: '2026-11-30T02:40:00Z',
                   lastError: '550 mailbox unavailable',
+                  docSetId: null,
                   createdAt: '2026-11-30T02:00:00Z',
                   sentAt: null,
                 },

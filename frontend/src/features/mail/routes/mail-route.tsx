@@ -5,7 +5,7 @@ import { useNotifier } from '../../../components/ui/notifier.js';
 import { useUrlState } from '../../../components/ui/use-url-state.js';
 import { errorMessage } from '../../../lib/api-client.js';
 import { useDeliverOutbox } from '../api/deliver-outbox.js';
-import { OUTBOX_STATUSES, type OutboxStatus } from '../api/get-outbox.js';
+import { OUTBOX_STATUSES, type OutboxStatus } from '@linkloom/shared';
 import { MailboxPanel } from '../components/mailbox-panel.js';
 import { OutboxPanel } from '../components/outbox-panel.js';
 

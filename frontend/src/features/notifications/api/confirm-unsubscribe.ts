@@ -1,9 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
-import type { UnsubscribeResult } from '@linkloom/shared';
+import { unsubscribeResultSchema, type UnsubscribeResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 
 export function confirmUnsubscribe(token: string): Promise<UnsubscribeResult> {
-  return apiFetch<UnsubscribeResult>(`/unsubscribe/${encodeURIComponent(token)}`, { method: 'POST' });
+  return apiFetch(`/unsubscribe/${encodeURIComponent(token)}`, unsubscribeResultSchema, { method: 'POST' });
 }
 
 export function useConfirmUnsubscribe() {

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { NotificationSettings } from '@linkloom/shared';
+import { notificationSettingsSchema, type NotificationSettings } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 
 export const notificationSettingsQueryKey = () => ['me', 'notifications'] as const;
 
 export function getNotificationSettings(signal?: AbortSignal): Promise<NotificationSettings> {
-  return apiFetch<NotificationSettings>('/me/notifications', { signal });
+  return apiFetch('/me/notifications', notificationSettingsSchema, { signal });
 }
 
 export function notificationSettingsQueryOptions() {

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { UnsubscribeInfo } from '@linkloom/shared';
+import { unsubscribeInfoSchema, type UnsubscribeInfo } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 
 /** What an unsubscribe link stands for; reading it changes nothing (mail scanners open links too). */
 export function getUnsubscribeLink(token: string, signal?: AbortSignal): Promise<UnsubscribeInfo> {
-  return apiFetch<UnsubscribeInfo>(`/unsubscribe/${encodeURIComponent(token)}`, { signal });
+  return apiFetch(`/unsubscribe/${encodeURIComponent(token)}`, unsubscribeInfoSchema, { signal });
 }
 
 export function unsubscribeLinkQueryOptions(token: string) {

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { NotificationSettings, UpdateNotificationSettings } from '@linkloom/shared';
+import { notificationSettingsSchema, type NotificationSettings, type UpdateNotificationSettings } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { notificationSettingsQueryKey } from './get-notification-settings.js';
 
 /** Sends only what changed; the server answers with the whole stored state. */
 export function updateNotificationSettings(patch: UpdateNotificationSettings): Promise<NotificationSettings> {
-  return apiFetch<NotificationSettings>('/me/notifications', { method: 'PATCH', body: patch });
+  return apiFetch('/me/notifications', notificationSettingsSchema, { method: 'PATCH', body: patch });
 }
 
 export function useUpdateNotificationSettings() {

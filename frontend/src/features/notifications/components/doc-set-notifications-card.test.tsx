@@ -2,18 +2,20 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { notificationSettingsSchema } from '@linkloom/shared';
+import { parsed, signInAs } from '../../../testing/fixtures.js';
 import { DocSetNotificationsCard } from './doc-set-notifications-card.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
 const D1 = '11111111-1111-4111-8111-111111111111';
-const settings = (digestKind: boolean) => ({
-  timeZone: 'UTC',
-  timeZoneIsDefault: true,
-  kinds: { digest: digestKind, 'task-assigned': true, 'task-reopened': true, 'pruning-waiting': true },
-  docSets: [{ docSetId: D1, docSetName: 'Harbour guides', digest: true, nothingChanged: false, pruningWaiting: true }],
-});
+const settings = (digestKind: boolean) =>
+  parsed(notificationSettingsSchema, {
+    timeZone: 'UTC',
+    timeZoneIsDefault: true,
+    kinds: { digest: digestKind, 'task-assigned': true, 'task-reopened': true, 'pruning-waiting': true },
+    docSets: [{ docSetId: D1, docSetName: 'Harbour guides', digest: true, nothingChanged: false, pruningWaiting: true }],
+  });
 
 describe('e-mail choices on a doc set', () => {
   it('changes this doc set’s digest from its own screen', async () => {

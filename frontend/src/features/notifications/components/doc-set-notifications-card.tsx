@@ -1,4 +1,4 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { FormControlLabel, Link, Paper, Stack, Switch, Typography } from '@mui/material';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { SaveState } from './save-state.js';

@@ -1,13 +1,20 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { unsubscribeInfoSchema, unsubscribeResultSchema } from '@linkloom/shared';
 import { clearSession } from '../../../lib/session.js';
+import { parsed } from '../../../testing/fixtures.js';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
 import UnsubscribeRoute from './unsubscribe-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const info = { kind: 'digest', kindLabel: 'Digest of what changed', maskedEmail: 'w•••@example.test', subscribed: true };
+const info = parsed(unsubscribeInfoSchema, {
+  kind: 'digest',
+  kindLabel: 'Digest of what changed',
+  maskedEmail: 'w•••@example.test',
+  subscribed: true,
+});
 
 describe('unsubscribe page', () => {
   it('changes nothing on opening, and unsubscribes on the button, without signing in', async () => {
@@ -15,7 +22,11 @@ describe('unsubscribe page', () => {
     const fake = fakeFetch({
       'GET /api/unsubscribe/tok.en.sig': () => ({ body: info }),
       'POST /api/unsubscribe/tok.en.sig': () => ({
-        body: { ...info, subscribed: false, message: 'You will get no more e-mails of the kind “Digest of what changed”.' },
+        body: parsed(unsubscribeResultSchema, {
+          ...info,
+          subscribed: false,
+          message: 'You will get no more e-mails of the kind “Digest of what changed”.',
+        }),
       }),
     });
     vi.stubGlobal('fetch', fake.fn);

@@ -1,4 +1,4 @@
-import { useParams } from 'react-router-dom';
+import { useParams } from 'react-router';
 import { Alert, Box, Button, Paper, Stack, Typography } from '@mui/material';
 import { LogoMark } from '../../../components/brand/logo-mark.js';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';

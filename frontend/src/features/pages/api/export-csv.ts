@@ -1,6 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiDownload, type Query } from '../../../lib/api-client.js';
-import { runPath } from './run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export interface ExportRequest {
   /** `pages`, `links`, ...: which rows the server writes. */

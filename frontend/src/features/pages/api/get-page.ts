@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { pageDetailSchema, type PageDetail } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { PageDetail } from '../types.js';
 import { runQueryKey } from './get-run.js';
-import { runPath } from './run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export function getPage(docSetId: string, runId: string, path: string, signal?: AbortSignal): Promise<PageDetail> {
-  return apiFetch<PageDetail>(`${runPath(docSetId, runId)}/page`, { query: { path }, signal });
+  return apiFetch(`${runPath(docSetId, runId)}/page`, pageDetailSchema, { query: { path }, signal });
 }
 
 export function pageQueryOptions(docSetId: string, runId: string, path: string) {

@@ -1,8 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { runPageListSchema, type PageFlag, type RunPageList } from '@linkloom/shared';
 import { apiFetch, type Query } from '../../../lib/api-client.js';
-import type { ListResult, PageFlag, PageRow } from '../types.js';
 import { runQueryKey } from './get-run.js';
-import { runPath } from './run-path.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export interface PagesQuery {
   page: number;
@@ -31,8 +31,8 @@ export function pagesQueryParams(query: PagesQuery): Query {
   };
 }
 
-export function getPages(docSetId: string, runId: string, query: PagesQuery, signal?: AbortSignal): Promise<ListResult<PageRow>> {
-  return apiFetch<ListResult<PageRow>>(`${runPath(docSetId, runId)}/pages`, { query: pagesQueryParams(query), signal });
+export function getPages(docSetId: string, runId: string, query: PagesQuery, signal?: AbortSignal): Promise<RunPageList> {
+  return apiFetch(`${runPath(docSetId, runId)}/pages`, runPageListSchema, { query: pagesQueryParams(query), signal });
 }
 
 export function pagesQueryOptions(docSetId: string, runId: string, query: PagesQuery) {

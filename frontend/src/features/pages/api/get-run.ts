@@ -1,24 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { runSchema, type Run } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { docSetQueryKey } from '../../doc-sets/api/get-doc-set.js';
-import { runPath } from './run-path.js';
-
-import type { RunCounts } from '@linkloom/shared';
-
-export type RunFindingCounts = RunCounts;
-
-export interface AnalysisRun {
-  id: string;
-  status: string;
-  finishedAt?: string | null;
-  counts: RunFindingCounts | null;
-}
+import { runPath } from '../../../lib/run-path.js';
 
 /** Key prefix of everything read from one run; `latest` is its own key, as the server resolves it. */
 export const runQueryKey = (docSetId: string, runId: string) => [...docSetQueryKey(docSetId), 'run', runId] as const;
 
-export function getRun(docSetId: string, runId: string, signal?: AbortSignal): Promise<AnalysisRun> {
-  return apiFetch<AnalysisRun>(runPath(docSetId, runId), { signal });
+export function getRun(docSetId: string, runId: string, signal?: AbortSignal): Promise<Run> {
+  return apiFetch(runPath(docSetId, runId), runSchema, { signal });
 }
 
 export function runQueryOptions(docSetId: string, runId: string) {

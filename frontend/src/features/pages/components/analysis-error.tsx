@@ -1,5 +1,5 @@
 import { Button } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { ApiError } from '../../../lib/api-client.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';

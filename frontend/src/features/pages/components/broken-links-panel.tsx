@@ -1,5 +1,5 @@
 import { Box, Chip, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import type { PageBrokenLink } from '../types.js';
+import type { PageBrokenLink } from '@linkloom/shared';
 
 /** Raw hrefs are shown as text, never as links: some are broken and some are unsafe (`javascript:`). */
 export function RawHref({ href }: { href: string | null | undefined }) {

@@ -1,7 +1,7 @@
 import { useEffect, useState } from 'react';
 import { Box, Chip, InputAdornment, Stack, TextField } from '@mui/material';
 import SearchOutlined from '@mui/icons-material/SearchOutlined';
-import { PAGE_FLAGS } from '../types.js';
+import { PAGE_FLAGS } from '@linkloom/shared';
 import { FLAG_STYLES } from './finding-colours.js';
 import { toggleFlag, type ExplorerState } from './explorer-state.js';
 

@@ -1,5 +1,5 @@
 // Pure mapping between the explorer's URL state and the pages query: no React, easy to test.
-import { PAGE_FLAGS, type PageFlag } from '../types.js';
+import { PAGE_FLAGS, type PageFlag } from '@linkloom/shared';
 import type { PagesQuery } from '../api/get-pages.js';
 
 /** Defaults of every explorer setting kept in the URL; ranges are strings so an empty box means "any". */

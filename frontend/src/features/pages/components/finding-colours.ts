@@ -1,7 +1,7 @@
 // Linkloom's own colours for findings, shared by chips, the neighbourhood picture and the link map.
 // Chosen from the brand palette's neighbours (src/lib/theme.ts) and spaced in hue and lightness so the
 // legend still reads for the common red-green colour-vision deficiencies; shape (border) backs up colour.
-import type { PageFlag } from '../types.js';
+import { type PageFlag } from '@linkloom/shared';
 
 export interface FlagStyle {
   label: string;

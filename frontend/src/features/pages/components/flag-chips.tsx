@@ -1,5 +1,5 @@
 import { Chip, Stack } from '@mui/material';
-import type { PageFlag } from '../types.js';
+import { type PageFlag } from '@linkloom/shared';
 import { FLAG_STYLES } from './finding-colours.js';
 
 /** The finding flags of one page as small coloured chips; nothing when the page has none. */

@@ -1,6 +1,6 @@
 import { Link, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
-import type { LinkedPage } from '../types.js';
+import { Link as RouterLink } from 'react-router';
+import type { LinkedPage } from '@linkloom/shared';
 import { pageDetailHref } from './format.js';
 
 interface LinkedPagesPanelProps {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import { renderWithProviders } from '../../../testing/render.js';
-import type { Neighbourhood } from '../types.js';
+import type { Neighbourhood } from '@linkloom/shared';
 import { NeighbourhoodList } from './neighbourhood-list.js';
 
 // wheels/truing.md is the centre. spokes.md and tools.md link to it; it links to tension.md and to tools.md;

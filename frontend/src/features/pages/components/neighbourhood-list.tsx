@@ -1,6 +1,6 @@
 import { Box, Link, List, ListItem, ListItemText, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
-import type { NeighbourNode, Neighbourhood } from '../types.js';
+import { Link as RouterLink } from 'react-router';
+import type { NeighbourNode, Neighbourhood } from '@linkloom/shared';
 import { normaliseFlag, FLAG_STYLES } from './finding-colours.js';
 import { formatScore, pageDetailHref } from './format.js';
 import { groupNeighbours } from './neighbourhood-model.js';

@@ -1,6 +1,6 @@
 // Pure reading of a page's neighbourhood (nodes up to two link steps away, with the edges between them):
 // who links here, where this page links, and what lies two steps out. Used by the picture and its list.
-import type { NeighbourNode, Neighbourhood } from '../types.js';
+import type { NeighbourNode, Neighbourhood } from '@linkloom/shared';
 import { FOCUS_COLOUR, findingColour, nodeSize } from './finding-colours.js';
 
 export interface NeighbourGroups {

@@ -1,9 +1,9 @@
 import { useMemo, useState } from 'react';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router';
 import { Paper, Stack, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import type { LayoutOptions } from 'cytoscape';
 import { GraphCanvas } from '../../link-map/components/graph-canvas.js';
-import type { Neighbourhood } from '../types.js';
+import type { Neighbourhood } from '@linkloom/shared';
 import { FindingLegend } from './finding-legend.js';
 import { NeighbourhoodList } from './neighbourhood-list.js';
 import { neighbourhoodElements } from './neighbourhood-model.js';

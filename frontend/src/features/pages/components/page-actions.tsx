@@ -3,7 +3,7 @@ import { Button } from '@mui/material';
 import AssignmentOutlined from '@mui/icons-material/AssignmentOutlined';
 import ContentCutOutlined from '@mui/icons-material/ContentCutOutlined';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
-import type { PageDetail } from '../types.js';
+import type { PageDetail } from '@linkloom/shared';
 import {
   describeNomination,
   describeTaskRequest,

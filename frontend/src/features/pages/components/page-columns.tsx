@@ -1,11 +1,11 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import { Box, Link, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
-import { pageFlags, type PageRow } from '../types.js';
+import { Link as RouterLink } from 'react-router';
+import { pageFlags, type RunPageItem } from '@linkloom/shared';
 import { FlagChips } from './flag-chips.js';
 import { formatCount, formatScore, formatTimesAverage, pageDetailHref } from './format.js';
 
-const number = (id: keyof PageRow, header: string, format: (v: number) => string = formatCount): ColumnDef<PageRow> => ({
+const number = (id: keyof RunPageItem, header: string, format: (v: number) => string = formatCount): ColumnDef<RunPageItem> => ({
   id,
   header,
   accessorKey: id,
@@ -14,7 +14,7 @@ const number = (id: keyof PageRow, header: string, format: (v: number) => string
 });
 
 /** The explorer's columns; each sortable column's id is its API sort key. */
-export function pageColumns(docSetId: string, runId: string): ColumnDef<PageRow>[] {
+export function pageColumns(docSetId: string, runId: string): ColumnDef<RunPageItem>[] {
   return [
     {
       id: 'title',

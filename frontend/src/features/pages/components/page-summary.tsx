@@ -1,5 +1,5 @@
 import { Box, Card, CardContent, Paper, Table, TableBody, TableCell, TableRow, Typography } from '@mui/material';
-import { pageFlags, type PageDetail } from '../types.js';
+import { pageFlags, type PageDetail } from '@linkloom/shared';
 import { FlagChips } from './flag-chips.js';
 import { formatCount, formatScore, formatTimesAverage } from './format.js';
 

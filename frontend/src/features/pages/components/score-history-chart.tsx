@@ -1,7 +1,7 @@
 import { Paper, Typography } from '@mui/material';
 import { LineChart } from '@mui/x-charts/LineChart';
 import { chartColors } from '../../../lib/theme.js';
-import type { ScorePoint } from '../types.js';
+import type { ScorePoint } from '@linkloom/shared';
 import { formatScore } from './format.js';
 
 /** The page's stationary score in each finished run, oldest first. */

@@ -1,6 +1,6 @@
 import { Link, List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
-import type { PageDetail } from '../types.js';
+import { Link as RouterLink } from 'react-router';
+import type { PageDetail } from '@linkloom/shared';
 import { formatScore, pageDetailHref } from './format.js';
 
 type Props = Pick<PageDetail, 'unlinkedMentions' | 'suggestedSources' | 'stationaryScore'> & { docSetId: string; runId: string };

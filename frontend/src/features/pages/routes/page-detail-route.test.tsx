@@ -15,7 +15,10 @@ function api() {
     'GET /api/doc-sets/d1/runs/latest/page': (url) => ({
       body: pageDetail(url.searchParams.get('path') ?? '', {
         title: 'Chain wear',
-        brokenLinks: [{ href: 'javascript:void(0)', line: 8, column: 2, status: 'unsafe', reason: 'Runs script' }],
+        // The panel shows every href as text; a scheme the browser would run must not become a link.
+        brokenLinks: [
+          { href: 'javascript:void(0)', line: 8, column: 2, targetPath: null, anchor: null, status: 'broken', reason: 'No such page' },
+        ],
         suggestedSources: [{ path: 'tools.md', title: 'Tools', scoreGain: 0.002, reason: 'Mentions chains' }],
         inbound: [{ path: 'index.md', title: 'Welcome', line: 14 }],
       }),

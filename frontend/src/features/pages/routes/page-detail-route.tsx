@@ -1,4 +1,4 @@
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams } from 'react-router';
 import { Box, Breadcrumbs, Link, Stack, Typography } from '@mui/material';
 import { PageHeader } from '../../../components/ui/page-header.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';

@@ -2,7 +2,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { runPageListSchema } from '@linkloom/shared';
+import { pagedList, parsed, signInAs } from '../../../testing/fixtures.js';
 import { pageRow } from '../testing-fixtures.js';
 import PageExplorerRoute from './page-explorer-route.js';
 
@@ -11,15 +12,14 @@ afterEach(() => vi.unstubAllGlobals());
 function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest/pages': (url) => ({
-      body: {
-        items:
+      body: parsed(runPageListSchema, {
+        ...pagedList(
           url.searchParams.get('flags') === 'orphan'
             ? [pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })]
             : [pageRow('index.md', { rank: 1 }), pageRow('brakes/pads.md', { orphan: true, inboundCount: 0 })],
-        total: 2,
-        page: 1,
-        pageSize: 50,
-      },
+        ),
+        runId: 'r1',
+      }),
     }),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { pruningDecisionsResultSchema, type PruningDecision } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { PruningDecision } from '../types.js';
 import { pruningQueryKey } from './get-pruning-list.js';
 
 export interface DecidePruningInput {
@@ -11,7 +11,7 @@ export interface DecidePruningInput {
 }
 
 export function decidePruning({ docSetId, ...body }: DecidePruningInput): Promise<{ version: number; decided: number }> {
-  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/pruning/decisions`, { method: 'POST', body });
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/pruning/decisions`, pruningDecisionsResultSchema, { method: 'POST', body });
 }
 
 export function useDecidePruning() {

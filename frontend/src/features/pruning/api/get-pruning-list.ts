@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { pruningListSchema, type PruningList } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { PruningList, PruningStatusFilter } from '../types.js';
+import type { PruningStatusFilter } from '../components/pruning-labels.js';
 
 export const pruningQueryKey = (docSetId: string) => ['pruning', docSetId] as const;
 
@@ -11,7 +12,7 @@ export interface PruningQuery {
 }
 
 export function getPruningList(docSetId: string, query: PruningQuery, signal?: AbortSignal): Promise<PruningList> {
-  return apiFetch<PruningList>(`/doc-sets/${encodeURIComponent(docSetId)}/pruning`, {
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/pruning`, pruningListSchema, {
     query: { ...query, status: query.status || undefined },
     signal,
   });

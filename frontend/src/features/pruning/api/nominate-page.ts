@@ -1,10 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { pruningItemSchema, type PruningItem } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { PruningItem } from '../types.js';
 import { pruningQueryKey } from './get-pruning-list.js';
 
 export function nominatePage({ docSetId, path, reason }: { docSetId: string; path: string; reason: string }): Promise<PruningItem> {
-  return apiFetch<PruningItem>(`/doc-sets/${encodeURIComponent(docSetId)}/pruning/nominations`, { method: 'POST', body: { path, reason } });
+  return apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/pruning/nominations`, pruningItemSchema, {
+    method: 'POST',
+    body: { path, reason },
+  });
 }
 
 export function useNominatePage() {

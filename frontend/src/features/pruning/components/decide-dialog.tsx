@@ -3,7 +3,8 @@ import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack
 import { ApiError, errorMessage } from '../../../lib/api-client.js';
 import { useNotifier } from '../../../components/ui/notifier.js';
 import { useDecidePruning } from '../api/decide-pruning.js';
-import { DECISION_LABELS, type PruningDecision } from '../types.js';
+import type { PruningDecision } from '@linkloom/shared';
+import { DECISION_LABELS } from './pruning-labels.js';
 
 export interface DecisionRequest {
   paths: string[];

@@ -1,6 +1,7 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import { Button, Chip, Stack, Tooltip, Typography } from '@mui/material';
-import { DECISION_LABELS, type PruningDecision, type PruningItem } from '../types.js';
+import type { PruningDecision, PruningItem } from '@linkloom/shared';
+import { DECISION_LABELS } from './pruning-labels.js';
 import { ReasonChips } from './reason-chips.js';
 
 const DECISION_COLOUR = { approve: 'warning', reject: 'default', keep: 'success' } as const;

@@ -1,5 +1,6 @@
 import { Chip, Stack, Tooltip } from '@mui/material';
-import { RULE_LABELS, type PruningReason } from '../types.js';
+import type { PruningReason } from '@linkloom/shared';
+import { RULE_LABELS } from './pruning-labels.js';
 
 /** The rules a candidate met; each chip's tooltip (and accessible name) gives the value and the threshold. */
 export function ReasonChips({ reasons }: { reasons: PruningReason[] }) {

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { useParams } from 'react-router';
 import { Button, Tab, Tabs, Typography } from '@mui/material';
 import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
 import { DataTable } from '../../../components/ui/data-table.js';
@@ -14,7 +14,8 @@ import { usePruningList } from '../api/get-pruning-list.js';
 import { DecideDialog, type DecisionRequest } from '../components/decide-dialog.js';
 import { PruningCaution } from '../components/pruning-caution.js';
 import { pruningColumns } from '../components/pruning-columns.js';
-import type { PruningDecision, PruningStatusFilter } from '../types.js';
+import type { PruningDecision } from '@linkloom/shared';
+import type { PruningStatusFilter } from '../components/pruning-labels.js';
 
 const FILTERS: { value: PruningStatusFilter; label: string }[] = [
   { value: 'undecided', label: 'Undecided' },

@@ -1,24 +1,19 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { runListSchema, type Run } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult, Run } from '../../../types/api.js';
 import { docSetQueryKey } from '../../doc-sets/api/get-doc-set.js';
 
 export const runsQueryKey = (docSetId: string) => [...docSetQueryKey(docSetId), 'runs'] as const;
 
 export const isRunBusy = (run: Pick<Run, 'status'>) => run.status === 'running' || run.status === 'queued';
 
-function startedTime(run: Run): number {
-  return Date.parse(run.createdAt ?? run.startedAt ?? run.finishedAt ?? '') || 0;
-}
-
 /** Runs newest first, whatever order the server used. */
 export async function getRuns(docSetId: string, signal?: AbortSignal): Promise<Run[]> {
-  const result = await apiFetch<ListResult<Run> | Run[]>(`/doc-sets/${encodeURIComponent(docSetId)}/runs`, {
+  const result = await apiFetch(`/doc-sets/${encodeURIComponent(docSetId)}/runs`, runListSchema, {
     query: { page: 1, pageSize: 500 },
     signal,
   });
-  const runs = Array.isArray(result) ? result : result.items;
-  return [...runs].sort((a, b) => startedTime(b) - startedTime(a));
+  return [...result.items].sort((a, b) => Date.parse(b.createdAt) - Date.parse(a.createdAt));
 }
 
 export function runsQueryOptions(docSetId: string) {

@@ -1,5 +1,5 @@
 import type { ColumnDef } from '@tanstack/react-table';
-import type { Run } from '../../../types/api.js';
+import type { Run } from '@linkloom/shared';
 import { StatusChip } from '../../doc-sets/components/status-chip.js';
 
 const nf = new Intl.NumberFormat();

@@ -3,7 +3,8 @@ import { ErrorPanel } from '../../../components/ui/error-panel.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import { useRunDiff, type FindingChange } from '../api/get-run-diff.js';
 
-const KIND_WORDS: Record<string, string> = {
+const KIND_WORDS: Record<FindingChange['kind'], string> = {
+  pages: 'Pages added or removed',
   brokenLinks: 'Broken links',
   brokenAnchors: 'Broken anchors',
   unsafeLinks: 'Unsafe links',
@@ -15,23 +16,17 @@ const KIND_WORDS: Record<string, string> = {
   islandPages: 'Pages on islands',
 };
 
-/** A finding is a page path, a link, or something else; show the most telling text. */
-function describe(item: unknown): string {
-  if (typeof item === 'string') return item;
-  if (item && typeof item === 'object') {
-    const o = item as Record<string, unknown>;
-    if (o.sourcePath && o.href) return `${o.sourcePath}${o.line ? `:${o.line}` : ''} → ${o.href}`;
-    return String(o.path ?? o.title ?? JSON.stringify(o));
-  }
-  return String(item);
+/** A page finding names the page; a link finding the page it is on and the href as written. */
+function describe(item: FindingChange['appeared'][number]): string {
+  return 'href' in item ? `${item.sourcePath} → ${item.href}` : item.path;
 }
 
 function KindRow({ change }: { change: FindingChange }) {
-  const sample = (items: unknown[], total: number) =>
+  const sample = (items: FindingChange['appeared'], total: number) =>
     items.slice(0, 5).map(describe).join(', ') + (total > 5 ? ` and ${total - Math.min(5, items.length)} more` : '');
   return (
     <TableRow>
-      <TableCell>{KIND_WORDS[change.kind] ?? change.kind}</TableCell>
+      <TableCell>{KIND_WORDS[change.kind]}</TableCell>
       <TableCell align="right" sx={{ color: change.appearedTotal ? 'error.main' : undefined }}>
         +{change.appearedTotal}
       </TableCell>
@@ -89,9 +84,9 @@ export function RunDiffPanel({ docSetId, runId, againstId }: { docSetId: string;
               {diff.data.scoreMoves.slice(0, 15).map((m) => (
                 <TableRow key={m.path}>
                   <TableCell>{m.title || m.path}</TableCell>
-                  <TableCell align="right">{m.before == null ? 'new' : m.before.toFixed(4)}</TableCell>
-                  <TableCell align="right" sx={{ color: (m.after ?? 0) >= (m.before ?? 0) ? 'success.main' : 'error.main' }}>
-                    {m.after == null ? 'gone' : m.after.toFixed(4)}
+                  <TableCell align="right">{m.before.toFixed(4)}</TableCell>
+                  <TableCell align="right" sx={{ color: m.after >= m.before ? 'success.main' : 'error.main' }}>
+                    {m.after.toFixed(4)}
                   </TableCell>
                 </TableRow>
               ))}

@@ -2,30 +2,42 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { run, signInAs } from '../../../testing/fixtures.js';
+import { runDiffSchema } from '@linkloom/shared';
+import { docSet, pagedList, parsed, run, signInAs } from '../../../testing/fixtures.js';
 import RunsRoute from './runs-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
+const NONE = { total: 0, items: [] };
+const NO_CHANGE = { appeared: NONE, disappeared: NONE };
+
 function api() {
   return fakeFetch({
-    'GET /api/doc-sets/d1': () => ({ body: { id: 'd1', name: 'Handbook', settings: {} } }),
-    'GET /api/doc-sets/d1/runs': () => ({ body: { items: [run('r1', 1), run('r3', 3), run('r2', 2)], total: 3, page: 1, pageSize: 500 } }),
+    'GET /api/doc-sets/d1': () => ({ body: docSet('d1', 'Handbook') }),
+    'GET /api/doc-sets/d1/runs': () => ({ body: pagedList([run('r1', 1), run('r3', 3), run('r2', 2)], 1, 500) }),
     'GET /api/doc-sets/d1/runs/r3/diff': () => ({
-      body: {
+      body: parsed(runDiffSchema, {
         runId: 'r3',
         againstRunId: 'r1',
         kinds: {
-          brokenLinks: {
-            appeared: { total: 1, items: [{ sourcePath: 'guide/a.md', line: 4, href: 'gone.md' }] },
-            disappeared: { total: 0, items: [] },
-          },
-          orphans: { appeared: { total: 0, items: [] }, disappeared: { total: 0, items: [] } },
+          pages: NO_CHANGE,
+          orphans: NO_CHANGE,
+          deadEnds: NO_CHANGE,
+          unreachable: NO_CHANGE,
+          deepPages: NO_CHANGE,
+          islandPages: NO_CHANGE,
+          brokenLinks: { appeared: { total: 1, items: [{ sourcePath: 'guide/a.md', href: 'gone.md' }] }, disappeared: NONE },
+          brokenAnchors: NO_CHANGE,
+          unsafeLinks: NO_CHANGE,
+          ambiguousLinks: NO_CHANGE,
         },
-        scoreMoves: [{ path: 'index.md', title: 'Welcome', before: 0.05, after: 0.08 }],
-      },
+        scoreMoves: [{ path: 'index.md', title: 'Welcome', before: 0.05, after: 0.08, change: 0.03 }],
+      }),
     }),
-    'POST /api/doc-sets/d1/runs': () => ({ status: 202, body: { run: { id: 'r4' } } }),
+    'POST /api/doc-sets/d1/runs': () => ({
+      status: 202,
+      body: { run: run('r4', 4, { status: 'queued', counts: null, finishedAt: null }) },
+    }),
   });
 }
 
@@ -41,7 +53,7 @@ describe('runs', () => {
     await user.click(await screen.findByRole('checkbox', { name: 'Select row r1' }));
     await user.click(screen.getByRole('checkbox', { name: 'Select row r3' }));
     await user.click(screen.getByRole('button', { name: 'Compare selected' }));
-    expect(await screen.findByText('guide/a.md:4 → gone.md', { exact: false })).toBeTruthy();
+    expect(await screen.findByText('guide/a.md → gone.md', { exact: false })).toBeTruthy();
     const diffCall = fake.calls.find((c) => c.url.pathname.endsWith('/diff'));
     expect(diffCall?.url.searchParams.get('against')).toBe('r1');
     expect(screen.getByText('Welcome')).toBeTruthy();

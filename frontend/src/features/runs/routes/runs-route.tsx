@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { useParams } from 'react-router';
 import { Button, Stack, Typography } from '@mui/material';
 import ReplayOutlined from '@mui/icons-material/ReplayOutlined';
 import CompareArrowsOutlined from '@mui/icons-material/CompareArrowsOutlined';

@@ -1,8 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ScheduleStatus } from '@linkloom/shared';
+import { scheduleStatusSchema, type ScheduleStatus } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-
-export type { NightlyDocSetResult, NightlyResult, ScheduleStatus } from '@linkloom/shared';
 
 /** While the job runs the screen asks again this often; a nightly job takes minutes, so 3 s is plenty. */
 export const RUNNING_POLL_MS = 3_000;
@@ -10,7 +8,7 @@ export const RUNNING_POLL_MS = 3_000;
 export const scheduleQueryKey = () => ['schedule'] as const;
 
 export function getSchedule(signal?: AbortSignal): Promise<ScheduleStatus> {
-  return apiFetch<ScheduleStatus>('/schedule', { signal });
+  return apiFetch('/schedule', scheduleStatusSchema, { signal });
 }
 
 /** A "Run now" the server accepted: when, and the `lastStartedAt` seen before it. */

@@ -1,12 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { RunNowResult } from '@linkloom/shared';
+import { runNowResultSchema, type RunNowResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { scheduleQueryKey } from './get-schedule.js';
 
-export type { RunNowResult };
-
 export function runNightlyNow(): Promise<RunNowResult> {
-  return apiFetch<RunNowResult>('/schedule/run-now', { method: 'POST' });
+  return apiFetch('/schedule/run-now', runNowResultSchema, { method: 'POST' });
 }
 
 export function useRunNightlyNow() {

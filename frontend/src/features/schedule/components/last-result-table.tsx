@@ -1,7 +1,7 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Chip, Link, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { EmptyState } from '../../../components/ui/empty-state.js';
-import type { NightlyDocSetResult, NightlyResult } from '../api/get-schedule.js';
+import type { NightlyDocSetResult, NightlyResult } from '@linkloom/shared';
 
 /** A finished run opens on its findings; a failed one on the runs list, where its error is shown. */
 function runLink(result: NightlyDocSetResult): string {

@@ -1,7 +1,7 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Chip, Link, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { EmptyState } from '../../../components/ui/empty-state.js';
-import type { ScheduleStatus } from '../api/get-schedule.js';
+import type { ScheduleStatus } from '@linkloom/shared';
 
 /** Which doc sets the nightly job covers, and how: a server folder is re-read, else the latest snapshot re-analysed. */
 export function NightlyDocSets({ docSets }: { docSets: ScheduleStatus['docSets'] }) {

@@ -1,5 +1,5 @@
 import { Chip, Paper, Stack, Typography } from '@mui/material';
-import type { ScheduleStatus } from '../api/get-schedule.js';
+import type { ScheduleStatus } from '@linkloom/shared';
 
 const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : 'not yet');
 

@@ -2,12 +2,13 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { scheduleStatusSchema } from '@linkloom/shared';
+import { parsed, signInAs } from '../../../testing/fixtures.js';
 import ScheduleRoute from './schedule-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const idle = {
+const idle = parsed(scheduleStatusSchema, {
   nightlyTime: '02:00',
   timeZone: 'Europe/Oslo',
   nextRunAt: '2026-12-02T01:00:00Z',
@@ -27,7 +28,7 @@ const idle = {
     { id: 'd2', name: 'Ferry manuals', nightly: true, sourceFolder: null },
     { id: 'd3', name: 'Old drafts', nightly: false, sourceFolder: null },
   ],
-};
+});
 
 /** The page's own "Run now" button, not the confirmation dialog's (which may still be fading out). */
 const pageButton = () => screen.getAllByRole('button', { name: /Run now|Running…/ }).find((b) => !b.closest('[role="dialog"]'))!;

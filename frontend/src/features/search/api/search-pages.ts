@@ -1,11 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { searchResultSchema, type SearchMode, type SearchResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
 import { runQueryKey } from '../../pages/api/get-run.js';
-import { runPath } from '../../pages/api/run-path.js';
-import type { SearchMode, SearchResult } from '../types.js';
+import { runPath } from '../../../lib/run-path.js';
 
 export function searchPages(docSetId: string, runId: string, q: string, mode: SearchMode, signal?: AbortSignal): Promise<SearchResult> {
-  return apiFetch<SearchResult>(`${runPath(docSetId, runId)}/search`, { query: { q, mode }, signal });
+  return apiFetch(`${runPath(docSetId, runId)}/search`, searchResultSchema, { query: { q, mode }, signal });
 }
 
 export function searchQueryOptions(docSetId: string, runId: string, q: string, mode: SearchMode) {

@@ -1,5 +1,5 @@
 import { Box, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
-import type { SearchMode } from '../types.js';
+import type { SearchMode } from '@linkloom/shared';
 
 export const MODE_HELP: Record<SearchMode, { label: string; sentence: string }> = {
   blend: {

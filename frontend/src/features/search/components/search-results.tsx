@@ -1,7 +1,7 @@
 import { Box, Link, List, ListItem, Stack, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { formatScore, pageDetailHref } from '../../pages/components/format.js';
-import type { SearchHit } from '../types.js';
+import type { SearchHit } from '@linkloom/shared';
 import { HighlightedText } from './highlighted-text.js';
 
 const figure = (v: number) => (Number.isFinite(v) ? (Math.abs(v) >= 0.01 || v === 0 ? v.toFixed(3) : v.toExponential(2)) : '—');

@@ -2,7 +2,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { searchResultSchema } from '@linkloom/shared';
+import { pagedList, parsed, signInAs } from '../../../testing/fixtures.js';
 import SearchRoute from './search-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -12,8 +13,8 @@ const ATTACK = '<img src=x onerror="window.__hit=1">';
 function api() {
   return fakeFetch({
     'GET /api/doc-sets/d1/runs/latest/search': (url) => ({
-      body: {
-        items: [
+      body: parsed(searchResultSchema, {
+        ...pagedList([
           {
             path: 'brakes/bleeding.md',
             title: `Bleeding ${ATTACK} brakes`,
@@ -23,10 +24,11 @@ function api() {
             score: 0.37,
             why: `Strong text match; linked from 9 pages (${url.searchParams.get('mode')})`,
           },
-        ],
+        ]),
+        mode: url.searchParams.get('mode') === 'subgraph' ? 'subgraph' : 'blend',
+        capped: false,
         explanation: 'Ranked by text match and link score.',
-        total: 1,
-      },
+      }),
     }),
   });
 }

@@ -1,5 +1,5 @@
 import { useEffect, useState, type FormEvent } from 'react';
-import { useParams } from 'react-router-dom';
+import { useParams } from 'react-router';
 import { Button, Paper, Stack, TextField, Typography } from '@mui/material';
 import SearchOutlined from '@mui/icons-material/SearchOutlined';
 import { PageHeader } from '../../../components/ui/page-header.js';
@@ -10,7 +10,7 @@ import { AnalysisError } from '../../pages/components/analysis-error.js';
 import { useSearchPages } from '../api/search-pages.js';
 import { SearchModeToggle } from '../components/search-mode-toggle.js';
 import { SearchResults } from '../components/search-results.js';
-import type { SearchMode } from '../types.js';
+import type { SearchMode } from '@linkloom/shared';
 
 export default function SearchRoute() {
   const { docSetId = '' } = useParams();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { taskEventSchema, type TaskEventItem } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { TaskEvent } from '../types.js';
 import { taskQueryOptions } from './get-task.js';
 
-export function addTaskComment({ taskId, body }: { taskId: string; body: string }): Promise<TaskEvent> {
-  return apiFetch<TaskEvent>(`/tasks/${encodeURIComponent(taskId)}/comments`, { method: 'POST', body: { body } });
+export function addTaskComment({ taskId, body }: { taskId: string; body: string }): Promise<TaskEventItem> {
+  return apiFetch(`/tasks/${encodeURIComponent(taskId)}/comments`, taskEventSchema, { method: 'POST', body: { body } });
 }
 
 export function useAddTaskComment() {

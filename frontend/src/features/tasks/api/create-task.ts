@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { taskItemSchema, type TaskItem, type TaskKind, type TaskPriority } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TaskKind } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export interface CreateTaskInput {
@@ -10,13 +10,13 @@ export interface CreateTaskInput {
   title: string;
   details?: string;
   assigneeId?: string | null;
-  priority?: Priority;
+  priority?: TaskPriority;
   dueDate?: string | null;
 }
 
 /** POST /api/tasks: one task made by hand. */
-export function createTask(input: CreateTaskInput): Promise<Task> {
-  return apiFetch<Task>('/tasks', { method: 'POST', body: input });
+export function createTask(input: CreateTaskInput): Promise<TaskItem> {
+  return apiFetch('/tasks', taskItemSchema, { method: 'POST', body: input });
 }
 
 export function useCreateTask() {

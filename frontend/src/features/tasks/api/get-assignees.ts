@@ -1,10 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { assigneeListSchema, type Assignee, type ListResult } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult } from '../../../types/api.js';
-import type { Assignee } from '../types.js';
 
 export function getAssignees(signal?: AbortSignal): Promise<ListResult<Assignee>> {
-  return apiFetch<ListResult<Assignee>>('/tasks/assignees', { signal });
+  return apiFetch('/tasks/assignees', assigneeListSchema, { signal });
 }
 
 export function assigneesQueryOptions() {

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { taskDetailSchema, type TaskDetail } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { TaskDetail } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export function getTask(taskId: string, signal?: AbortSignal): Promise<TaskDetail> {
-  return apiFetch<TaskDetail>(`/tasks/${encodeURIComponent(taskId)}`, { signal });
+  return apiFetch(`/tasks/${encodeURIComponent(taskId)}`, taskDetailSchema, { signal });
 }
 
 export function taskQueryOptions(taskId: string) {

@@ -1,13 +1,13 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { taskListSchema, type ListResult, type TaskItem } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult } from '../../../types/api.js';
-import type { Task, TaskFilters } from '../types.js';
+import type { TaskFilters } from '../components/task-labels.js';
 
 export const tasksQueryKey = () => ['tasks'] as const;
 
-export function getTasks(filters: TaskFilters, signal?: AbortSignal): Promise<ListResult<Task>> {
+export function getTasks(filters: TaskFilters, signal?: AbortSignal): Promise<ListResult<TaskItem>> {
   const { overdue, status, ...rest } = filters;
-  return apiFetch<ListResult<Task>>('/tasks', { query: { ...rest, status, overdue: overdue ? 'true' : undefined }, signal });
+  return apiFetch('/tasks', taskListSchema, { query: { ...rest, status, overdue: overdue ? 'true' : undefined }, signal });
 }
 
 export function tasksQueryOptions(filters: TaskFilters) {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { taskItemSchema, type TASK_STATUSES_SET_BY_PEOPLE, type TaskItem, type TaskPriority } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Priority, Task, TASK_STATUSES_SET_BY_PEOPLE } from '../types.js';
 import { tasksQueryKey } from './get-tasks.js';
 
 export interface UpdateTaskInput {
@@ -8,14 +8,14 @@ export interface UpdateTaskInput {
   title?: string;
   details?: string;
   assigneeId?: string | null;
-  priority?: Priority;
+  priority?: TaskPriority;
   dueDate?: string | null;
   /** `verified` is set by runs only. */
   status?: (typeof TASK_STATUSES_SET_BY_PEOPLE)[number];
 }
 
-export function updateTask({ id, ...patch }: UpdateTaskInput): Promise<Task> {
-  return apiFetch<Task>(`/tasks/${encodeURIComponent(id)}`, { method: 'PATCH', body: patch });
+export function updateTask({ id, ...patch }: UpdateTaskInput): Promise<TaskItem> {
+  return apiFetch(`/tasks/${encodeURIComponent(id)}`, taskItemSchema, { method: 'PATCH', body: patch });
 }
 
 export function useUpdateTask() {

@@ -2,17 +2,28 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { assigneeSchema } from '@linkloom/shared';
+import { pagedList, parsed, signInAs, task } from '../../../testing/fixtures.js';
 import { CreateTasksDialog } from './create-tasks-dialog.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
+const WREN = parsed(assigneeSchema, { id: 'u-w', name: 'Wren Writer', email: 'w@x.test', role: 'writer' });
+
 function api() {
   return fakeFetch({
     'GET /api/tasks/assignees': () => ({
-      body: { items: [{ id: 'u-w', name: 'Wren Writer', email: 'w@x.test', role: 'writer' }], total: 1, page: 1, pageSize: 1 },
+      body: pagedList([WREN], 1, 1),
     }),
-    'POST /api/tasks/bulk': () => ({ status: 201, body: { items: [{ id: 't1', assignee: { id: 'u-w' } }] } }),
+    'POST /api/tasks/bulk': () => ({
+      status: 201,
+      body: {
+        items: [
+          task('t1', { pagePath: 'a.md', assignee: { id: WREN.id, name: WREN.name, email: WREN.email } }),
+          task('t2', { pagePath: 'b.md', assignee: { id: WREN.id, name: WREN.name, email: WREN.email } }),
+        ],
+      },
+    }),
   });
 }
 

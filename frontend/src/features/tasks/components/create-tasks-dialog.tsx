@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import { useParams } from 'react-router-dom';
+import { TASK_KINDS, TASK_PRIORITIES, type TaskGrouping, type TaskKind, type TaskPriority } from '@linkloom/shared';
+import { useParams } from 'react-router';
 import {
   Alert,
   Button,
@@ -19,8 +20,8 @@ import { errorMessage } from '../../../lib/api-client.js';
 import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { useAssignees } from '../api/get-assignees.js';
 import { useCreateTasks } from '../api/create-tasks.js';
-import { KIND_LABELS, PRIORITIES, TASK_KINDS, type Priority, type TaskGrouping, type TaskKind, type TaskRequest } from '../types.js';
 import { SelectedFindings, selectionSize } from './selected-findings.js';
+import { KIND_LABELS, type TaskRequest } from './task-labels.js';
 
 export type { TaskRequest };
 
@@ -57,7 +58,7 @@ function CreateTasksForm({ request, onClose, docSetId: targetDocSet }: { request
   const [grouping, setGrouping] = useState<TaskGrouping>('per-row');
   const [title, setTitle] = useState('');
   const [assigneeId, setAssigneeId] = useState(OWNER);
-  const [priority, setPriority] = useState<Priority>('normal');
+  const [priority, setPriority] = useState<TaskPriority>('normal');
   const [dueDate, setDueDate] = useState('');
   const [details, setDetails] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
@@ -134,8 +135,14 @@ function CreateTasksForm({ request, onClose, docSetId: targetDocSet }: { request
             ))}
           </TextField>
           <Stack direction="row" spacing={2}>
-            <TextField select label="Priority" value={priority} onChange={(e) => setPriority(e.target.value as Priority)} sx={{ flex: 1 }}>
-              {PRIORITIES.map((p) => (
+            <TextField
+              select
+              label="Priority"
+              value={priority}
+              onChange={(e) => setPriority(e.target.value as TaskPriority)}
+              sx={{ flex: 1 }}
+            >
+              {TASK_PRIORITIES.map((p) => (
                 <MenuItem key={p} value={p}>
                   {p}
                 </MenuItem>

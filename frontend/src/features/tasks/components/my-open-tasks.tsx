@@ -1,14 +1,14 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { Link, List, ListItem, ListItemText, Paper, Stack, Typography } from '@mui/material';
 import { useTasks } from '../api/get-tasks.js';
-import type { Task } from '../types.js';
+import type { TaskItem } from '@linkloom/shared';
 import { TaskStatusChips } from './task-chips.js';
 
 const SHOWN = 10;
 
 /** Reopened work first (a run found the problem again), then by due date as the server sorts it. */
-export function openTasksFirst(tasks: Task[]): Task[] {
-  const reopened = (t: Task) => (t.check?.outcome === 'reopened' ? 0 : 1);
+export function openTasksFirst(tasks: TaskItem[]): TaskItem[] {
+  const reopened = (t: TaskItem) => (t.check?.outcome === 'reopened' ? 0 : 1);
   return [...tasks].sort((a, b) => reopened(a) - reopened(b));
 }
 

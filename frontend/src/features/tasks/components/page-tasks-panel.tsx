@@ -1,7 +1,7 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
+import { KIND_LABELS } from './task-labels.js';
 import { Link, List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
 import { useTasks } from '../api/get-tasks.js';
-import { KIND_LABELS } from '../types.js';
 import { TaskStatusChips } from './task-chips.js';
 
 /** Tasks about one page (every status), shown on the page detail; writers see only theirs. */

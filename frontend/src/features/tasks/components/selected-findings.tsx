@@ -1,5 +1,5 @@
 import { List, ListItem, ListItemText, Typography } from '@mui/material';
-import type { TaskRequest } from '../types.js';
+import type { TaskRequest } from './task-labels.js';
 
 const SHOWN = 8;
 

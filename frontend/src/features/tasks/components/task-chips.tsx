@@ -1,17 +1,18 @@
 import { Chip, Stack, Tooltip } from '@mui/material';
-import { STATUS_LABELS, type Task } from '../types.js';
+import type { TaskItem } from '@linkloom/shared';
+import { STATUS_LABELS } from './task-labels.js';
 
 const STATUS_COLOUR = { open: 'default', 'in-progress': 'info', done: 'default', verified: 'success', 'wont-fix': 'default' } as const;
 
-const byRun = (task: Pick<Task, 'check'>) => (task.check?.runNumber ? ` by run ${task.check.runNumber}` : '');
+const byRun = (task: Pick<TaskItem, 'check'>) => (task.check?.runNumber ? ` by run ${task.check.runNumber}` : '');
 
 /** The status in words: "Fixed and verified by run 7" is not the writer's "Done". */
-export function statusLabel(task: Pick<Task, 'status' | 'check'>): string {
+export function statusLabel(task: Pick<TaskItem, 'status' | 'check'>): string {
   return task.status === 'verified' ? `${STATUS_LABELS.verified}${byRun(task)}` : STATUS_LABELS[task.status];
 }
 
 /** Status plus what the latest run said (reopened, still found, partly fixed) and whether it is overdue. */
-export function TaskStatusChips({ task }: { task: Pick<Task, 'status' | 'verification' | 'overdue' | 'check'> }) {
+export function TaskStatusChips({ task }: { task: Pick<TaskItem, 'status' | 'verification' | 'overdue' | 'check'> }) {
   const reopened = task.status === 'open' && task.check?.outcome === 'reopened';
   const partly = task.check?.outcome === 'partly-fixed' && task.status !== 'verified';
   return (

@@ -1,10 +1,11 @@
 import type { ColumnDef } from '@tanstack/react-table';
+import type { TaskItem } from '@linkloom/shared';
+import { KIND_LABELS } from './task-labels.js';
 import { Typography } from '@mui/material';
-import { KIND_LABELS, type Task } from '../types.js';
 import { TaskStatusChips } from './task-chips.js';
 
 /** Sortable ids match the API's sort keys (dueDate, priority, pagePath, status, createdAt). */
-export const taskColumns: ColumnDef<Task, unknown>[] = [
+export const taskColumns: ColumnDef<TaskItem, unknown>[] = [
   {
     id: 'title',
     header: 'Task',

@@ -1,4 +1,6 @@
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
+import { TASK_STATUSES_SET_BY_PEOPLE } from '@linkloom/shared';
+import { KIND_LABELS, STATUS_LABELS } from './task-labels.js';
 import { Box, Divider, Drawer, IconButton, Link, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import CloseOutlined from '@mui/icons-material/CloseOutlined';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';
@@ -10,7 +12,6 @@ import { useRoleAtLeast } from '../../../lib/use-role.js';
 import { useAssignees } from '../api/get-assignees.js';
 import { useTask } from '../api/get-task.js';
 import { useUpdateTask, type UpdateTaskInput } from '../api/update-task.js';
-import { KIND_LABELS, STATUS_LABELS, TASK_STATUSES_SET_BY_PEOPLE } from '../types.js';
 import { statusLabel, TaskStatusChips } from './task-chips.js';
 import { TaskFindingsList } from './task-findings-list.js';
 import { TaskThread } from './task-thread.js';

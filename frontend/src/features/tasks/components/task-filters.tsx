@@ -1,7 +1,7 @@
 import { FormControlLabel, MenuItem, Stack, Switch, TextField } from '@mui/material';
+import { TASK_KINDS, TASK_STATUSES, type Assignee } from '@linkloom/shared';
+import { KIND_LABELS, STATUS_LABELS } from './task-labels.js';
 import { useDocSets } from '../../doc-sets/api/get-doc-sets.js';
-import { KIND_LABELS, STATUS_LABELS, TASK_KINDS, TASK_STATUSES } from '../types.js';
-import type { Assignee } from '../types.js';
 
 export interface TaskFilterState {
   docSetId: string;

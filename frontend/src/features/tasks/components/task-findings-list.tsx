@@ -1,8 +1,8 @@
 import { Chip, List, ListItem, ListItemText, Typography } from '@mui/material';
-import type { Task, TaskCheckItem } from '../types.js';
+import type { TaskCheckItem, TaskItem } from '@linkloom/shared';
 
 /** The task's findings as the latest run saw them; before any run, as they were when the task was made. */
-export function findingItems(task: Pick<Task, 'pagePath' | 'finding' | 'check'>): (TaskCheckItem & { checked: boolean })[] {
+export function findingItems(task: Pick<TaskItem, 'pagePath' | 'finding' | 'check'>): (TaskCheckItem & { checked: boolean })[] {
   if (task.check) return task.check.items.map((i) => ({ ...i, checked: true }));
   const links = task.finding.brokenLinks ?? [];
   if (links.length)
@@ -19,7 +19,7 @@ export function findingItems(task: Pick<Task, 'pagePath' | 'finding' | 'check'>)
 }
 
 /** One row per link or page of the task, saying which are still found. */
-export function TaskFindingsList({ task }: { task: Pick<Task, 'kind' | 'pagePath' | 'finding' | 'check'> }) {
+export function TaskFindingsList({ task }: { task: Pick<TaskItem, 'kind' | 'pagePath' | 'finding' | 'check'> }) {
   const items = findingItems(task);
   const run = task.check?.runNumber ? `run ${task.check.runNumber}` : 'the latest run';
   // Runs judge links and page findings; a review or free-form task is judged by people.

@@ -1,14 +1,14 @@
 import { useState, type FormEvent } from 'react';
+import type { TaskEventItem } from '@linkloom/shared';
 import { Box, Button, List, ListItem, ListItemText, Stack, TextField, Typography } from '@mui/material';
 import { errorMessage } from '../../../lib/api-client.js';
 import { useNotifier } from '../../../components/ui/notifier.js';
 import { useAddTaskComment } from '../api/add-task-comment.js';
-import type { TaskEvent } from '../types.js';
 
 const FIELD_NAMES: Record<string, string> = { assigneeId: 'assignee', dueDate: 'due date' };
 
 /** Field changes in words; people are named in the task itself, so ids are not repeated here. */
-const describeChange = (changes: TaskEvent['changes']) =>
+const describeChange = (changes: TaskEventItem['changes']) =>
   Object.entries(changes)
     .filter(([, { from, to }]) => from !== to)
     .map(([field, { from, to }]) =>
@@ -17,7 +17,7 @@ const describeChange = (changes: TaskEvent['changes']) =>
     .join('; ');
 
 /** Comments and history in one time line, oldest first; the comment box only for those who may comment. */
-export function TaskThread({ taskId, events, canComment }: { taskId: string; events: TaskEvent[]; canComment: boolean }) {
+export function TaskThread({ taskId, events, canComment }: { taskId: string; events: TaskEventItem[]; canComment: boolean }) {
   const [body, setBody] = useState('');
   const add = useAddTaskComment();
   const { notify } = useNotifier();

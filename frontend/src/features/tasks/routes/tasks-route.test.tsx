@@ -1,16 +1,16 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { pagedList, signInAs } from '../../../testing/fixtures.js';
 import TasksRoute from './tasks-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
 function api() {
   return fakeFetch({
-    'GET /api/tasks': () => ({ body: { items: [], total: 0, page: 1, pageSize: 50 } }),
-    'GET /api/tasks/assignees': () => ({ body: { items: [], total: 0, page: 1, pageSize: 0 } }),
-    'GET /api/doc-sets': () => ({ body: { items: [], total: 0, page: 1, pageSize: 500 } }),
+    'GET /api/tasks': () => ({ body: pagedList([]) }),
+    'GET /api/tasks/assignees': () => ({ body: pagedList([], 1, 0) }),
+    'GET /api/doc-sets': () => ({ body: pagedList([], 1, 500) }),
   });
 }
 

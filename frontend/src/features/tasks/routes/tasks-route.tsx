@@ -1,4 +1,5 @@
 import { Tab, Tabs } from '@mui/material';
+import type { TaskKind } from '@linkloom/shared';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { EmptyState } from '../../../components/ui/empty-state.js';
 import { PageHeader } from '../../../components/ui/page-header.js';
@@ -9,7 +10,6 @@ import { useTasks } from '../api/get-tasks.js';
 import { taskColumns } from '../components/task-columns.js';
 import { TaskDetailDrawer } from '../components/task-detail-drawer.js';
 import { TaskFilters } from '../components/task-filters.js';
-import type { TaskKind } from '../types.js';
 
 const DEFAULTS = {
   view: 'mine',

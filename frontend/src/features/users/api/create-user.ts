@@ -1,17 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { userDetailsSchema, type CreateUserInput, type UserDetails } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Role, User } from '../../../types/api.js';
 import { usersQueryKey } from './get-users.js';
 
-export interface CreateUserInput {
-  email: string;
-  name: string;
-  role: Role;
-  password: string;
-}
-
-export function createUser(input: CreateUserInput): Promise<User> {
-  return apiFetch<User>('/users', { method: 'POST', body: input });
+export function createUser(input: CreateUserInput): Promise<UserDetails> {
+  return apiFetch('/users', userDetailsSchema, { method: 'POST', body: input });
 }
 
 export function useCreateUser() {

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { userDetailsListSchema, type ListResult, type UserDetails } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { ListResult, User } from '../../../types/api.js';
 
 export const usersQueryKey = () => ['users'] as const;
 
-export function getUsers(page: number, pageSize: number, signal?: AbortSignal): Promise<ListResult<User>> {
-  return apiFetch<ListResult<User>>('/users', { query: { page, pageSize }, signal });
+export function getUsers(page: number, pageSize: number, signal?: AbortSignal): Promise<ListResult<UserDetails>> {
+  return apiFetch('/users', userDetailsListSchema, { query: { page, pageSize }, signal });
 }
 
 export function usersQueryOptions(page: number, pageSize: number) {

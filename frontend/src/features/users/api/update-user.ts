@@ -1,16 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { userDetailsSchema, type UpdateUserInput, type UserDetails } from '@linkloom/shared';
 import { apiFetch } from '../../../lib/api-client.js';
-import type { Role, User } from '../../../types/api.js';
 import { usersQueryKey } from './get-users.js';
 
-export interface UpdateUserInput {
-  id: string;
-  role?: Role;
-  disabled?: boolean;
-}
-
-export function updateUser({ id, ...patch }: UpdateUserInput): Promise<User> {
-  return apiFetch<User>(`/users/${encodeURIComponent(id)}`, { method: 'PATCH', body: patch });
+export function updateUser({ id, ...patch }: UpdateUserInput & { id: string }): Promise<UserDetails> {
+  return apiFetch(`/users/${encodeURIComponent(id)}`, userDetailsSchema, { method: 'PATCH', body: patch });
 }
 
 export function useUpdateUser() {

@@ -2,21 +2,29 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { fakeFetch, renderWithProviders } from '../../../testing/render.js';
-import { signInAs } from '../../../testing/fixtures.js';
+import { userDetailsSchema, type Role } from '@linkloom/shared';
+import { pagedList, parsed, signInAs } from '../../../testing/fixtures.js';
 import UsersRoute from './users-route.js';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const people = [
-  { id: 'u1', email: 'ada@example.test', name: 'Ada', role: 'admin', disabled: false, lastSignInAt: null },
-  { id: 'u2', email: 'bo@example.test', name: 'Bo', role: 'writer', disabled: false, lastSignInAt: null },
-];
+const person = (id: string, name: string, role: Role) =>
+  parsed(userDetailsSchema, {
+    id,
+    email: `${name.toLowerCase()}@example.test`,
+    name,
+    role,
+    disabled: false,
+    createdAt: '2026-11-01T09:00:00Z',
+    lastSignInAt: null,
+  });
+const people = [person('u1', 'Ada', 'admin'), person('u2', 'Bo', 'writer')];
 
 function api() {
   return fakeFetch({
-    'GET /api/users': () => ({ body: { items: people, total: 2, page: 1, pageSize: 50 } }),
+    'GET /api/users': () => ({ body: pagedList(people) }),
     'PATCH /api/users/u2': () => ({ body: { ...people[1], disabled: true } }),
-    'POST /api/users': () => ({ status: 201, body: { id: 'u3', email: 'cy@example.test', name: 'Cy', role: 'viewer' } }),
+    'POST /api/users': () => ({ status: 201, body: person('u3', 'Cy', 'viewer') }),
   });
 }
 

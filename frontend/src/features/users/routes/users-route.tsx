@@ -2,14 +2,13 @@ import { useState } from 'react';
 import type { ColumnDef } from '@tanstack/react-table';
 import { Button, Chip, MenuItem, Select, Switch, Tooltip } from '@mui/material';
 import PersonAddOutlined from '@mui/icons-material/PersonAddOutlined';
-import { ROLES, type Role } from '@linkloom/shared';
+import { ROLES, type Role, type UserDetails } from '@linkloom/shared';
 import { DataTable } from '../../../components/ui/data-table.js';
 import { PageHeader } from '../../../components/ui/page-header.js';
 import { useTableUrlState } from '../../../components/ui/use-url-state.js';
 import { useNotifier } from '../../../components/ui/notifier.js';
 import { errorMessage } from '../../../lib/api-client.js';
 import { useSession } from '../../../lib/session.js';
-import type { User } from '../../../types/api.js';
 import { useUsers } from '../api/get-users.js';
 import { useUpdateUser } from '../api/update-user.js';
 import { CreateUserDialog } from '../components/create-user-dialog.js';
@@ -24,7 +23,7 @@ export default function UsersRoute() {
   const me = useSession()?.user.id;
   const [creating, setCreating] = useState(false);
 
-  const patch = (user: User, change: { role?: Role; disabled?: boolean }, done: string) =>
+  const patch = (user: UserDetails, change: { role?: Role; disabled?: boolean }, done: string) =>
     update.mutate(
       { id: user.id, ...change },
       {
@@ -33,7 +32,7 @@ export default function UsersRoute() {
       },
     );
 
-  const columns: ColumnDef<User, unknown>[] = [
+  const columns: ColumnDef<UserDetails, unknown>[] = [
     { accessorKey: 'name', header: 'Name', enableSorting: false },
     { accessorKey: 'email', header: 'E-mail', enableSorting: false },
     {

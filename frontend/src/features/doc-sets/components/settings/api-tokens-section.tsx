@@ -4,7 +4,7 @@ import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { ConfirmDialog } from '../../../../components/ui/confirm-dialog.js';
 import { useNotifier } from '../../../../components/ui/notifier.js';
 import { errorMessage } from '../../../../lib/api-client.js';
-import type { ApiToken } from '../../../../types/api.js';
+import type { ApiToken } from '@linkloom/shared';
 import { useTokens } from '../../api/get-tokens.js';
 import { useCreateToken } from '../../api/create-token.js';
 import { useDeleteToken } from '../../api/delete-token.js';

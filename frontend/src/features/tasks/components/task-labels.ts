@@ -1,25 +1,4 @@
-// Shapes of the tasks API (docs/mail-and-work.md), inferred from the shared contracts, and their labels.
-import {
-  TASK_KINDS,
-  TASK_PRIORITIES,
-  TASK_STATUSES,
-  TASK_STATUSES_SET_BY_PEOPLE,
-  type SelectedLink,
-  type TaskCheck,
-  type TaskCheckItem,
-  type TaskDetail,
-  type TaskEventItem,
-  type TaskGrouping,
-  type TaskItem,
-  type TaskKind,
-  type TaskPriority,
-  type TaskStatus,
-} from '@linkloom/shared';
-
-export { TASK_KINDS, TASK_STATUSES, TASK_STATUSES_SET_BY_PEOPLE };
-export type { SelectedLink, TaskCheck, TaskCheckItem, TaskDetail, TaskGrouping, TaskKind, TaskStatus };
-export const PRIORITIES = TASK_PRIORITIES;
-export type Priority = TaskPriority;
+import type { SelectedLink, TaskKind, TaskStatus } from '@linkloom/shared';
 
 export const KIND_LABELS: Record<TaskKind, string> = {
   'add-inbound-links': 'Add inbound links',
@@ -38,9 +17,6 @@ export const STATUS_LABELS: Record<TaskStatus, string> = {
   'wont-fix': 'Won’t fix',
 };
 
-export type Task = TaskItem;
-export type TaskEvent = TaskEventItem;
-
 /** What "Create tasks" starts from: the selected pages, or the selected links (then `pagePaths` are their pages). */
 export interface TaskRequest {
   kind: TaskKind;
@@ -48,13 +24,7 @@ export interface TaskRequest {
   links?: SelectedLink[];
 }
 
-export interface Assignee {
-  id: string;
-  name: string;
-  email: string;
-  role: string;
-}
-
+/** The task list's filters and paging, as kept in the URL. */
 export interface TaskFilters {
   assignee?: string;
   status?: string[];

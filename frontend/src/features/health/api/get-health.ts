@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../lib/api-client.js';
-import type { Health } from '../../types/api.js';
+import { healthSchema, type Health } from '@linkloom/shared';
+import { apiFetch } from '../../../lib/api-client.js';
 
 export function getHealth(signal?: AbortSignal): Promise<Health> {
-  return apiFetch<Health>('/health', { signal });
+  return apiFetch('/health', healthSchema, { signal });
 }
 
 export function healthQueryOptions() {
