@@ -133,9 +133,8 @@ describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
       const probe = probeInflation();
       try {
         const rss = process.memoryUsage().rss;
-        const started = performance.now();
+        // Refused from the declared sizes: proven by nothing being inflated, not by a wall-clock bound.
         const response = await expectRefused(archive.bytes, 422, 'ARCHIVE_ENTRY_TOO_LARGE', archive.label);
-        expect(performance.now() - started, archive.label).toBeLessThan(1_000);
         expect(probe.bytes, archive.label).toBe(0);
         expect((process.memoryUsage().rss - rss) / 2 ** 20, archive.label).toBeLessThan(50);
         if (archive.check === 16) expect(response.body.details[0]).toBe('docs/huge.md is 200 MB; the limit is 5 MiB');
@@ -145,11 +144,15 @@ describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
     }
   });
 
-  it('15: 50,000 entries are refused from the entry count in under a second', async () => {
+  it('15: 50,000 entries are refused from the entry count, before any entry is inflated', async () => {
     const archive = hostile.manyEntries();
-    const started = performance.now();
-    await expectRefused(archive.bytes, 422, 'ARCHIVE_TOO_MANY_ENTRIES', archive.label);
-    expect(performance.now() - started).toBeLessThan(1_000);
+    const probe = probeInflation();
+    try {
+      await expectRefused(archive.bytes, 422, 'ARCHIVE_TOO_MANY_ENTRIES', archive.label);
+      expect(probe.bytes).toBe(0);
+    } finally {
+      probe.restore();
+    }
   });
 
   it('7, 12: damage found while reading fails the import atomically (ARCHIVE_CORRUPT, no rows kept)', async () => {
