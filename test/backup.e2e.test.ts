@@ -17,7 +17,7 @@ function script(name: 'backup' | 'restore', dataDir: string, args: string[] = []
   });
 }
 
-describe('backup and restore of the embedded database (RELIABILITY check 72)', () => {
+describe('backup and restore of the embedded database (docs/threats.md check 72)', () => {
   const servers: RunningServer[] = [];
   const restoredDir = mkdtempSync(join(tmpdir(), 'linkloom-restored-'));
   afterAll(async () => {

@@ -2,7 +2,7 @@
  * Import benchmark: `npm run bench:import` (root) runs the compiled file with --expose-gc.
  *   node --expose-gc backend/dist/bench/import.bench.js [--zip FILE --settings JSON] [--pages 10000]
  * Without --zip it writes the synthetic doc set (bench/synthetic) and a copy with 1% of pages changed:
- * 9,960 pages + 40 assets by default, i.e. exactly the 10,000-entry archive cap of RELIABILITY.md 1.6
+ * 9,960 pages + 40 assets by default, i.e. exactly the 10,000-entry archive cap of docs/threats.md, "Limits"
  * (10,000 pages plus their assets would be refused as ARCHIVE_TOO_MANY_ENTRIES). It imports through the real pipeline (the app on a fresh PGlite data folder; the HTTP upload is
  * left out) and measures, in the same run, two floors: unzip + read of every page entry, and bare parsing
  * of every page on one thread with the same parser. Each measurement prints one `BENCH {json}` line.
@@ -76,7 +76,7 @@ try {
         { id: null as unknown as string, email: 'bench', name: 'bench', role: 'admin' },
         { name: 'Benchmark', description: '', settings },
       );
-    // The product stops an import at 120 s (RELIABILITY.md 1.6); the benchmark lifts that on its own app so a
+    // The product stops an import at 120 s (docs/threats.md, "Limits"); the benchmark lifts that on its own app so a
     // slow run still yields figures, and reports whether the product limit would have been met.
     (app.get(INGEST_LIMITS) as IngestLimits).importTimeoutMs = Number(args['import-timeout-s']) * 1000;
     const results: Measurement[] = [];

@@ -7,7 +7,7 @@ const PUBLIC = new Set(['POST /api/auth/sign-in', 'GET /api/health', 'GET /api/u
 const DUMMY_ID = '00000000-0000-4000-8000-000000000000';
 
 /**
- * RELIABILITY check 56, first half: the route list comes from the app's own OpenAPI document, so a route
+ * docs/threats.md check 56, first half: the route list comes from the app's own OpenAPI document, so a route
  * added later is covered without editing this test. Every route but sign-in, health and unsubscribe must refuse an
  * anonymous caller and a viewer must be refused every write that needs a higher role.
  */

@@ -26,7 +26,7 @@ export interface AppConfig {
   uploadMaxBytes: number;
   signInLimitPerMinute: number;
   importsPerHour: number;
-  /** Longest a whole import may take, and one page's parse (RELIABILITY 1.6 starting values, raised for big doc sets). */
+  /** Longest a whole import may take, and one page's parse (docs/threats.md "Limits" starting values, raised for big doc sets). */
   importTimeoutSeconds: number;
   pageParseTimeoutMs: number;
   logFormat: 'json' | 'text';

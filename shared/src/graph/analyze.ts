@@ -1,6 +1,6 @@
 /**
  * One analysis of a doc set's link graph: stationary score, rank, inbound/outbound counts, click depth,
- * reachability, orphans, dead ends, deep pages and islands, as defined in Linkloom's DOMAIN.md ("Metrics").
+ * reachability, orphans, dead ends, deep pages and islands, as defined in docs/metrics.md.
  *
  * When no entry page is given (or none of the given ids is a page), reachability cannot be judged, so the
  * analysis reports no false alarms: every page counts as reachable with depth null and deep false, the

@@ -7,7 +7,7 @@
 export { buildLinkGraph, buildGraphFromEdgePairs, hasEdge, inDegree, outDegree } from './build-graph.js';
 export type { IndexedLinkGraph, LinkGraph, LinkPair } from './build-graph.js';
 
-/** Stationary score (PageRank) by power iteration, as defined in DOMAIN.md. */
+/** Stationary score (PageRank) by power iteration, as defined in docs/metrics.md. */
 export { computeStationaryScore, STATIONARY_SCORE_DEFAULTS } from './algorithms/stationary-score.js';
 export type { StationaryScoreOptions, StationaryScoreResult } from './algorithms/stationary-score.js';
 

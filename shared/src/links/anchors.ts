@@ -1,5 +1,5 @@
 /**
- * Fragment checks of DOMAIN.md rule 7: a Markdown link's `#fragment` must equal one of the target's anchors
+ * Fragment checks of docs/link-rules.md rule 7: a Markdown link's `#fragment` must equal one of the target's anchors
  * (github-slugger heading slugs, `{#id}`, HTML `id`/`name`), as browsers compare fragments exactly. A wiki
  * link's `#Heading` matches heading text case-insensitively and `#^id` a block marker.
  */

@@ -56,7 +56,7 @@ function expectedTargets(html: string): string[] {
 
 /**
  * Examples that legitimately differ, each with its reason (none skipped silently). Linkloom parses with GFM
- * on purpose (DOMAIN.md counts GFM bare-URL autolinks), so text that CommonMark leaves alone but GFM's
+ * on purpose (docs/link-rules.md counts GFM bare-URL autolinks), so text that CommonMark leaves alone but GFM's
  * autolink-literal extension turns into a link yields one more link than the CommonMark HTML shows.
  */
 const GFM = 'GFM autolink literal (GFM spec 0.29-gfm, section 6.9 "Autolinks (extension)") finds a bare URL or address';

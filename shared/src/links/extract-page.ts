@@ -1,6 +1,6 @@
 /**
  * Extraction of a page's facts (title, headings, anchors, links, front matter) from its CommonMark tree
- * (remark/micromark), following DOMAIN.md "Links: what counts". Links are read from parser nodes only.
+ * (remark/micromark), following docs/link-rules.md "What counts". Links are read from parser nodes only.
  */
 import type { Definition, Nodes, Root } from 'mdast';
 import { blankTaggedFence, readFrontMatter } from './front-matter.js';

@@ -1,5 +1,5 @@
 /**
- * Target lookup of DOMAIN.md rule 5: the exact file; without a page extension each configured extension;
+ * Target lookup of docs/link-rules.md rule 5: the exact file; without a page extension each configured extension;
  * `.html`/`.htm` mapped to the Markdown source; a folder (or trailing `/`) to its index files in order,
  * then a page of the folder's name. Letter case is ignored only when the doc set says so.
  */

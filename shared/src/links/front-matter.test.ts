@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { extractPage } from './extract-page.js';
 
-// RELIABILITY.md checks 29-33 (bad input in front matter and encodings). Times are printed, not asserted.
+// docs/threats.md checks 29-33 (bad input in front matter and encodings). Times are printed, not asserted.
 const codes = (markdown: string) => extractPage('p.md', markdown).warnings.map((w) => w.code);
 
 describe('line endings and BOM (check 29)', () => {

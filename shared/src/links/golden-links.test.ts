@@ -2,8 +2,8 @@ import { describe, expect, test } from 'vitest';
 import { docSetSettingsSchema } from '../schemas/doc-set-settings.js';
 import { resolveDocSet } from './resolve-doc-set.js';
 
-// RELIABILITY.md check 35, link extraction golden test. Expected values were written by hand from
-// DOMAIN.md "Links: how they resolve" (rules cited per row), not copied from a run.
+// docs/threats.md check 35, link extraction golden test. Expected values were written by hand from
+// docs/link-rules.md "How links resolve" (rules cited per row), not copied from a run.
 const source = [
   '# Install',
   '',
@@ -57,7 +57,7 @@ function resolveWith(caseInsensitive: boolean) {
   return resolveDocSet(files, settings).links.filter((l) => l.sourcePath === 'docs/guide/install.md');
 }
 
-describe('golden link classification (RELIABILITY check 35)', () => {
+describe('golden link classification (docs/threats.md check 35)', () => {
   const links = resolveWith(false);
 
   test('every link, in document order, with kind, status, target, anchor and flags', () => {

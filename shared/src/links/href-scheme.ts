@@ -2,7 +2,7 @@
  * Scheme classification of a link destination, the way browsers read it (WHATWG URL Standard, "basic URL
  * parser": leading/trailing C0 controls and spaces are stripped and ASCII tab/newline removed anywhere,
  * schemes are case-insensitive). Entity forms like `&#106;avascript:` arrive decoded from the parsers.
- * Allowlist per OWASP ASVS 5.0 V1.2.2 as applied in RELIABILITY.md check 36: `javascript:`, `data:`,
+ * Allowlist per OWASP ASVS 5.0 V1.2.2 as applied in docs/threats.md check 36: `javascript:`, `data:`,
  * `vbscript:` and `file:` are unsafe.
  */
 export const UNSAFE_SCHEMES = new Set(['javascript', 'data', 'vbscript', 'file']);

@@ -1,4 +1,4 @@
-/** Collects a page's links under the limits of RELIABILITY.md section 1.6 (20,000 per page, 2,048 chars per URL). */
+/** Collects a page's links under the limits of docs/threats.md, "Limits" (20,000 per page, 2,048 chars per URL). */
 import type { PageWarning, RawLink } from './types.js';
 
 export const MAX_LINKS_PER_PAGE = 20_000;

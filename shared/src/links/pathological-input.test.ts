@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { extractPage } from './extract-page.js';
 import { MAX_LINKS_PER_PAGE } from './link-collector.js';
 
-// RELIABILITY.md check 34 (pathological Markdown). Wall time is measured and printed, never asserted:
+// docs/threats.md check 34 (pathological Markdown). Wall time is measured and printed, never asserted:
 // the machine is shared. What is asserted is that each input finishes with the expected facts.
 function timed<T>(label: string, run: () => T): T {
   const started = performance.now();
@@ -11,7 +11,7 @@ function timed<T>(label: string, run: () => T): T {
   return result;
 }
 
-describe('pathological Markdown finishes (RELIABILITY check 34)', () => {
+describe('pathological Markdown finishes (docs/threats.md check 34)', () => {
   test('1 MB of "["', () => {
     const facts = timed('1 MB of [', () => extractPage('brackets.md', '['.repeat(1024 * 1024)));
     expect(facts.links).toEqual([]);

@@ -1,5 +1,5 @@
 /**
- * Redirects of DOMAIN.md rule 8: the doc set's list and each page's front-matter `redirect_from` (a
+ * Redirects of docs/link-rules.md rule 8: the doc set's list and each page's front-matter `redirect_from` (a
  * static-site convention, common practice). Old paths are compared in a loose form (no leading or trailing
  * slash, no base path or locale, no extension, no index file name, lower case), since they are written as
  * published URLs (`/docs/old/`) as often as file paths (`old.md`).

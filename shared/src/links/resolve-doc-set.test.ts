@@ -3,7 +3,7 @@ import { linkFixtures } from './fixtures/index.js';
 import { resolveDocSet } from './resolve-doc-set.js';
 
 // Hand-drawn cases with known answers: each fixture's expected pages, edges and problems were written by
-// hand from DOMAIN.md "Links: how they resolve", not produced by running this code.
+// hand from docs/link-rules.md "How links resolve", not produced by running this code.
 describe.each(linkFixtures)('fixture doc set: $name', (fixture) => {
   const result = resolveDocSet(fixture.files, fixture.settings);
 

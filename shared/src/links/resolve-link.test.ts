@@ -4,7 +4,7 @@ import { isPagePath, normalisePagePath } from './page-paths.js';
 import { createLinkResolver } from './resolve-link.js';
 import type { LinkKind, PageTargetInfo, RawLink } from './types.js';
 
-// Hand-drawn cases for DOMAIN.md "Links: how they resolve"; the rule number is named beside each check.
+// Hand-drawn cases for docs/link-rules.md "How links resolve"; the rule number is named beside each check.
 const info = (title: string, extra: Partial<PageTargetInfo> = {}): PageTargetInfo => ({
   title,
   aliases: [],

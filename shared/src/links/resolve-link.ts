@@ -1,5 +1,5 @@
 /**
- * Link resolution per DOMAIN.md "Links: how they resolve" (rules 1-11): scheme classification (WHATWG URL
+ * Link resolution per docs/link-rules.md "How links resolve" (rules 1-11): scheme classification (WHATWG URL
  * reading, see href-scheme.ts), RFC 3986 section 5.2 merging for relative paths, target lookup, anchors,
  * redirects and wiki links. Build one resolver per snapshot; `resolve` is then a few map look-ups.
  */

@@ -1,5 +1,5 @@
 /**
- * Wiki-link resolution of DOMAIN.md rule 6 (a note-taking convention, common practice), case-insensitive, in
+ * Wiki-link resolution of docs/link-rules.md rule 6 (a note-taking convention, common practice), case-insensitive, in
  * order: path from the doc-set root, path from the source page's folder, pages whose path ends with the given
  * path, a unique file name, then front-matter titles and aliases. Several matches at one step are reported
  * as ambiguous with the candidates, never guessed.

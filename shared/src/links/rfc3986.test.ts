@@ -63,7 +63,7 @@ describe('RFC 3986 section 5.4 reference resolution, adapted to paths', () => {
     expect(formatReference(resolveReference(base, reference))).toBe(expected);
   });
   test('climbing above the root is reported while the RFC result is kept', () => {
-    // RFC 3986 5.4.2: "../../../g" resolves to "/g"; Linkloom additionally needs to know it climbed (DOMAIN.md rule 4).
+    // RFC 3986 5.4.2: "../../../g" resolves to "/g"; Linkloom additionally needs to know it climbed (docs/link-rules.md rule 4).
     expect(resolveReference(base, '../../../g')).toMatchObject({ path: '/g', aboveRoot: true });
     expect(resolveReference(base, '../../g').aboveRoot).toBe(false);
   });

@@ -63,7 +63,7 @@ export class TargetIndex {
     return this.files.get(path) === 'asset';
   }
 
-  /** A target with a non-page extension is an asset even when missing (DOMAIN.md rule 11). */
+  /** A target with a non-page extension is an asset even when missing (docs/link-rules.md rule 11). */
   looksLikeAsset(path: string): boolean {
     const ext = extensionOf(path);
     return ext !== '' && !this.isPageExtension(ext) && ext !== '.html' && ext !== '.htm';

@@ -4,7 +4,7 @@ import { extractPage } from './extract-page.js';
 import { createLinkResolver } from './resolve-link.js';
 import type { RawLink } from './types.js';
 
-// RELIABILITY.md check 36 (OWASP ASVS 5.0 V1.2.2: only safe URL schemes may become links). The browser
+// docs/threats.md check 36 (OWASP ASVS 5.0 V1.2.2: only safe URL schemes may become links). The browser
 // behaviours the obfuscations rely on are from the WHATWG URL Standard, "basic URL parser": leading and
 // trailing C0 controls and spaces are stripped, ASCII tab and newline are removed anywhere, and schemes
 // are case-insensitive.
@@ -23,7 +23,7 @@ const unsafeHrefs = [
   'file:///outside/secret',
 ];
 
-describe('unsafe links (RELIABILITY check 36)', () => {
+describe('unsafe links (docs/threats.md check 36)', () => {
   test.each(unsafeHrefs)('%j is unsafe', (href) => {
     const link = resolver.resolve('a.md', raw(href));
     expect(link.status).toBe('unsafe');

@@ -1,5 +1,5 @@
 /**
- * `http(s)` URLs against the doc set's site base URLs (DOMAIN.md rules 2 and 9): under a base URL the link is
+ * `http(s)` URLs against the doc set's site base URLs (docs/link-rules.md rules 2 and 9): under a base URL the link is
  * internal and continues as a site path; the same host outside it is another site of the team
  * (`out-of-scope`); anything else is external. Parsed with the WHATWG URL parser (`URL`).
  */

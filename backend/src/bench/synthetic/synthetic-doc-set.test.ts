@@ -1,6 +1,6 @@
 /**
  * Small-size checks of the benchmark doc set. Link counts are taken by an outside CommonMark + GFM parser
- * (remark, as DOMAIN.md prescribes) rather than by the generator's own tally, and the zip is read back with
+ * (remark, as docs/link-rules.md prescribes) rather than by the generator's own tally, and the zip is read back with
  * yauzl, an independent zip reader.
  */
 import { mkdtempSync, rmSync } from 'node:fs';

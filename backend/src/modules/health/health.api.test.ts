@@ -51,7 +51,7 @@ describe('health, API docs, headers and error bodies', () => {
     expect((await t.http.get('/api/health')).status).toBe(200);
   });
 
-  it('rejects query objects and arrays where a number is expected (RELIABILITY check 41)', async () => {
+  it('rejects query objects and arrays where a number is expected (docs/threats.md check 41)', async () => {
     const admin = await t.tokenFor('admin');
     for (const query of ['pageSize=-1', 'pageSize=1e9', 'pageSize=abc', 'page=NaN', 'pageSize=501', 'page=1&page=2']) {
       const response = await t.http.get(`/api/users?${query}`).set('Authorization', `Bearer ${admin}`);

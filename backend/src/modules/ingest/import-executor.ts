@@ -28,7 +28,7 @@ export interface ImportJob {
 
 /**
  * Runs imports in the background and owns their end states: `ready` plus `snapshot.ready`, or `failed`
- * with its rows removed. On boot, imports a restart cut short become failed INTERRUPTED (RELIABILITY.md 1.7
+ * with its rows removed. On boot, imports a restart cut short become failed INTERRUPTED (docs/threats.md, "Import pipeline"
  * step 8) before anything new starts; `recovered` lets start-up work (the demo import) wait for that.
  */
 @Injectable()

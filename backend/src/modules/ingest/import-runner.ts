@@ -1,5 +1,5 @@
 /**
- * Pass 2 of an import (RELIABILITY.md 1.7 steps 5-7): stream the pages, hash each, reuse unchanged pages of
+ * Pass 2 of an import (docs/threats.md, "Import pipeline" steps 5-7): stream the pages, hash each, reuse unchanged pages of
  * the previous ready snapshot, parse the rest in the thread pool, write pages as batches complete, resolve
  * every link against the new file list, then flip the snapshot to `ready` in one small transaction.
  */

@@ -1,4 +1,4 @@
-/** Starting values of RELIABILITY.md 1.6 for the import pipeline; tests and the benchmark may override them. */
+/** Starting values of docs/threats.md, "Limits" for the import pipeline; tests and the benchmark may override them. */
 export interface IngestLimits {
   parserThreads: number;
   pageTimeoutMs: number;

@@ -1,6 +1,6 @@
 /**
  * Resolves every raw link of a snapshot against that snapshot's own file list (one resolver per import,
- * DOMAIN.md "Links: how they resolve") and writes the links in batches with page ids of the same snapshot.
+ * docs/link-rules.md "How links resolve") and writes the links in batches with page ids of the same snapshot.
  */
 import type { DocSetSettings } from '@linkloom/shared';
 import { createLinkResolver, type PageTargetInfo } from '@linkloom/shared/links';

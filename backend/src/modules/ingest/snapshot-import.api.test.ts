@@ -1,5 +1,5 @@
 /**
- * The import pipeline over HTTP: per-page content problems (RELIABILITY.md checks 27-34) skip or flag pages
+ * The import pipeline over HTTP: per-page content problems (docs/threats.md checks 27-34) skip or flag pages
  * without failing the import, one import per doc set (check 61), incremental re-import, interrupted imports
  * after a restart, the per-user quota (check 26), server-folder imports and the `snapshot.ready` event.
  */
@@ -161,7 +161,7 @@ describe('snapshot import pipeline', () => {
     const db = t.app.get(DbService).db;
     const [row] = await db.insert(snapshots).values({ docSetId, source: 'upload', status: 'importing' }).returning();
     await db.execute(sqlInsertPage(row.id));
-    // The boot hook a restart runs (RELIABILITY.md 1.7 step 8); the in-memory test database survives it.
+    // The boot hook a restart runs (docs/threats.md, "Import pipeline" step 8); the in-memory test database survives it.
     await t.app.get(ImportExecutor).onApplicationBootstrap();
     const after = await kit.waitFor(row.id);
     expect(after).toMatchObject({ status: 'failed', errorCode: 'INTERRUPTED' });
@@ -266,24 +266,22 @@ describe('snapshot import pipeline', () => {
       }
     ).rows;
     const flags = ['plain', 'say "hi"', 'back\\slash', '{braces},comma'];
-    await t.app
-      .get(PageStoreRepository)
-      .insertLinks(done.id, [
-        {
-          source_page_id: Number(page.id),
-          line: 1,
-          column: 1,
-          href: 'x',
-          kind: 'inline',
-          status: 'broken',
-          target_page_id: null,
-          target_path: null,
-          target_is_asset: false,
-          anchor: null,
-          reason: null,
-          flags,
-        },
-      ]);
+    await t.app.get(PageStoreRepository).insertLinks(done.id, [
+      {
+        source_page_id: Number(page.id),
+        line: 1,
+        column: 1,
+        href: 'x',
+        kind: 'inline',
+        status: 'broken',
+        target_page_id: null,
+        target_path: null,
+        target_is_asset: false,
+        anchor: null,
+        reason: null,
+        flags,
+      },
+    ]);
     const stored = (await t.app
       .get(DbService)
       .db.execute(sql`SELECT flags FROM links WHERE snapshot_id = ${done.id}::uuid`)) as unknown as { rows: { flags: string[] }[] };

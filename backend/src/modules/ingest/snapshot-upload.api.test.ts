@@ -1,5 +1,5 @@
 /**
- * RELIABILITY.md checks 1-25 over HTTP: every hostile archive is refused with its status and code, and
+ * docs/threats.md checks 1-25 over HTTP: every hostile archive is refused with its status and code, and
  * "nothing lost" holds afterwards (same snapshot list, same rows in the previous ready snapshot, no import
  * left running, no orphan rows, upload folder empty). Archive builders: backend/src/testing/zip.
  */
@@ -14,7 +14,7 @@ import { probeInflation } from '../../testing/zip/inflation-probe.js';
 import { createDocSet, importKit, type ImportKit, type StoredState } from './testing/ingest-test-kit.js';
 import { uploadDirOf } from './upload/upload-dir.js';
 
-describe('snapshot upload: hostile input (RELIABILITY.md checks 1-25)', () => {
+describe('snapshot upload: hostile input (docs/threats.md checks 1-25)', () => {
   let t: TestApp;
   let kit: ImportKit;
   let baseline: StoredState;

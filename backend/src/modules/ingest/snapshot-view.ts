@@ -29,7 +29,7 @@ export function toSnapshotView(row: SnapshotRow): SnapshotView {
   };
 }
 
-/** Drizzle's PGlite driver may hand timestamps back as strings (RELIABILITY.md 2.2). */
+/** Drizzle's PGlite driver may hand timestamps back as strings (docs/threats.md, "Database engine facts"). */
 function iso(value: Date | string | null): string | null {
   if (value === null) return null;
   return (value instanceof Date ? value : new Date(value)).toISOString();

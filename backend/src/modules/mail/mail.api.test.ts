@@ -29,7 +29,7 @@ describe('the built-in local mailbox', () => {
     const list = await t.http.get('/api/mail').set('Authorization', `Bearer ${admin}`);
     expect(list.status).toBe(200);
     expect(list.body.items).toHaveLength(1);
-    // CR/LF from a title can never start a new header (RELIABILITY check 81).
+    // CR/LF from a title can never start a new header (docs/threats.md check 81).
     expect(list.body.items[0]).toMatchObject({ subject: 'Hello Bcc: victim@example.com', to: ['writer@demo.linkloom.test'] });
     const message = await t.http.get(`/api/mail/${list.body.items[0].id}`).set('Authorization', `Bearer ${admin}`);
     expect(message.body.text.trim()).toBe('plain body');
@@ -51,7 +51,7 @@ describe('the built-in local mailbox', () => {
   });
 });
 
-/** A fake SMTP server we can start, stop and make answer 4xx/5xx (RELIABILITY checks 77-80). */
+/** A fake SMTP server we can start, stop and make answer 4xx/5xx (docs/threats.md checks 77-80). */
 async function fakeSmtp(port = 0, reply?: () => Error | null) {
   const received: { messageId: string | undefined; rcpt: string[] }[] = [];
   const server = new SMTPServer({

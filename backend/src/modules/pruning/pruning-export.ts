@@ -1,6 +1,6 @@
 // Exports of the approved list. CSV per RFC 4180 (Shafranovich, "Common Format and MIME Type for CSV Files",
 // section 2: quote fields holding comma, quote or line breaks; double inner quotes), with formula-injection
-// guarding per OWASP ASVS 5.0 1.2.10 (as cited by RELIABILITY.md check 39) and the OWASP "CSV Injection" page: cells starting with = + - @ or tab get a
+// guarding per OWASP ASVS 5.0 1.2.10 (as in docs/threats.md check 39) and the OWASP "CSV Injection" page: cells starting with = + - @ or tab get a
 // leading apostrophe. Content-Disposition per RFC 6266 section 4.3 with an RFC 8187 `filename*` for non-ASCII.
 
 const FORMULA_START = /^[=+\-@\t\r]/;

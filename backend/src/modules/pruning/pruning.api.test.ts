@@ -78,7 +78,7 @@ describe('pruning list', () => {
     expect(audit[0].n).toBe(1);
   });
 
-  it('lets only editors decide, and refuses a stale version with 409 (RELIABILITY checks 57 and 63)', async () => {
+  it('lets only editors decide, and refuses a stale version with 409 (docs/threats.md checks 57 and 63)', async () => {
     const { version } = await list();
     const decisions = [{ path: 'guide/old-ferry-times.md', decision: 'approve', note: '=cmd|/c calc' }];
     expect(

@@ -29,7 +29,7 @@ export class PruningRepository {
   }
 
   /**
-   * The optimistic-concurrency step (RELIABILITY check 63): the version moves on only if it still equals the
+   * The optimistic-concurrency step (docs/threats.md check 63): the version moves on only if it still equals the
    * one the client read. Returns the new version, or null when someone else changed the list first.
    */
   async advanceVersion(docSetId: string, expected: number | null, tx: Executor, runId?: string): Promise<number | null> {

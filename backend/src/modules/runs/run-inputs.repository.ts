@@ -4,7 +4,7 @@ import { DbService } from '../../db/db.service.js';
 import type { LinkStatusCount } from './analysis/run-counts.js';
 import { queryRows } from './sql-values.js';
 
-/** Statuses of a link that reaches a page: these are the edges of the link graph (DOMAIN.md, "Metrics"). */
+/** Statuses of a link that reaches a page: these are the edges of the link graph (docs/metrics.md). */
 export const EDGE_STATUSES = sql`('ok', 'redirected')`;
 
 export interface SnapshotPages {

@@ -1,5 +1,5 @@
 /**
- * Query contracts of the run routes. Sort keys and flags go through allowlists (RELIABILITY check 40):
+ * Query contracts of the run routes. Sort keys and flags go through allowlists (docs/threats.md check 40):
  * the SQL column is looked up here, never taken from the request; unknown keys are a 400 naming the
  * allowed values. Objects are strict, so `sort[]=a` or `q[$ne]=1` (check 41) are rejected too.
  */
@@ -75,8 +75,9 @@ export const pageDetailQuerySchema = z.object({ path: z.string().min(1).max(1024
 
 export const LINK_STATUSES = ['ok', 'broken', 'broken-anchor', 'unsafe', 'external', 'ambiguous', 'redirected', 'out-of-scope'] as const;
 /**
- * API.md names the source-page filter `page=<path>` while lists page with `page=<number>`: a whole number
- * is the list page, anything else the source page's path; `source=<path>` says it without ambiguity.
+ * The links list takes the source page as `page=<path>` too (docs/api.md, "Runs"), while lists page with
+ * `page=<number>`: a whole number is the list page, anything else the source page's path; `source=<path>`
+ * says it without ambiguity.
  */
 export const linkListQuerySchema = z
   .object({

@@ -77,7 +77,7 @@ describe('run results', () => {
     }
   });
 
-  // RELIABILITY checks 40 and 41 (OWASP ASVS 1.2.4: sort keys through an allowlist; LIKE wildcards escaped).
+  // docs/threats.md checks 40 and 41 (OWASP ASVS 1.2.4: sort keys through an allowlist; LIKE wildcards escaped).
   it('treats %, _ and \\ in q literally and rejects injected or malformed parameters', async () => {
     for (const q of ['%', '_', '\\'])
       expect(paths((await read(t, `${base}/pages?q=${encodeURIComponent(q)}`)).body), q).toEqual(['notes/100%_done.md']);
@@ -179,7 +179,7 @@ describe('run results', () => {
     expect(distribution.topShares.top50).toBeGreaterThanOrEqual(distribution.topShares.top10);
   });
 
-  // RELIABILITY check 39: RFC 6266 Content-Disposition, formula cells prefixed with a quote.
+  // docs/threats.md check 39: RFC 6266 Content-Disposition, formula cells prefixed with a quote.
   it('exports views as CSV with a safe file name and defused formulas', async () => {
     const response = await read(t, `${base}/export.csv?view=pages`);
     expect(response.status).toBe(200);

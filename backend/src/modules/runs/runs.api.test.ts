@@ -11,7 +11,7 @@ import { queryRows } from './sql-values.js';
 import { createDocSet, read, snapshotOf, startRun, waitForRun } from './testing/run-test-kit.js';
 
 // Langville and Meyer, "Deeper Inside PageRank", Internet Mathematics 1(3), 2004, section 4: six pages,
-// d = 0.9, page 2 a dead end. Scores as given in DOMAIN.md (recalled from memory there and reproduced by
+// d = 0.9, page 2 a dead end. Scores as given in docs/metrics.md (recalled from memory there and reproduced by
 // independent computation). Page 1 is the doc set's root index page, so it is the entry page.
 const PAGES = ['index.md', 'two.md', 'three.md', 'four.md', 'five.md', 'six.md'];
 const EDGES = [

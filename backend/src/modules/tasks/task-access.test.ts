@@ -13,7 +13,7 @@ const status = (fn: () => void): number | 'ok' => {
 const mine = { assigneeId: 'w1' };
 const theirs = { assigneeId: 'w2' };
 
-describe('task access rules (RELIABILITY checks 56, 57 and 60)', () => {
+describe('task access rules (docs/threats.md checks 56, 57 and 60)', () => {
   it('lets only editors and admins create', () => {
     expect(status(() => assertCanCreate({ id: 'a', role: 'admin' }))).toBe('ok');
     expect(status(() => assertCanCreate({ id: 'e', role: 'editor' }))).toBe('ok');

@@ -1,4 +1,4 @@
-// Who may do what with fix tasks (RELIABILITY checks 56, 57, 60): editors and admins manage every task;
+// Who may do what with fix tasks (docs/threats.md checks 56, 57, 60): editors and admins manage every task;
 // writers work on their own tasks only and may not reassign or reshape them; viewers only read.
 import { roleAtLeast, type Role } from '@linkloom/shared';
 import { forbidden } from '../../common/app-error.js';

@@ -152,7 +152,7 @@ describe('fix tasks', () => {
     expect(viewer.status).toBe(422);
   });
 
-  it('shows writers only their tasks and lets them change only the status (RELIABILITY check 60)', async () => {
+  it('shows writers only their tasks and lets them change only the status (docs/threats.md check 60)', async () => {
     const other = await t.http
       .post('/api/tasks')
       .set('Authorization', await as('editor'))

@@ -1,5 +1,5 @@
 /**
- * Builders for the archives of RELIABILITY.md checks 5-24 (bombs live in zip-bombs.ts). Each returns the
+ * Builders for the archives of docs/threats.md checks 5-24 (bombs live in zip-bombs.ts). Each returns the
  * bytes and the code the archive reader must answer with; `code: null` means the archive must be accepted.
  * Reused later by the HTTP-level tests, so every builder is deterministic.
  */

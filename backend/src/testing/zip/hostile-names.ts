@@ -1,4 +1,4 @@
-/** Builders for the name and content-mix archives of RELIABILITY.md checks 20-24. */
+/** Builders for the name and content-mix archives of docs/threats.md checks 20-24. */
 import { deflatedEntry, writeRawZip } from './raw-zip-writer.js';
 import type { HostileArchive } from './hostile-archives.js';
 import { wellFormedZip } from './well-formed-zip.js';

@@ -1,5 +1,5 @@
 /**
- * Bomb-shaped archives for RELIABILITY.md checks 10-16 and 19. Zeros are deflated in 1 MiB chunks through
+ * Bomb-shaped archives for docs/threats.md checks 10-16 and 19. Zeros are deflated in 1 MiB chunks through
  * a streaming deflater, so building the 200 MiB bomb never holds 200 MiB in memory. Deflate's best case is
  * about 1032:1 (D. Fifield, "A better zip bomb", WOOT 2019; figure from memory), so 200 MiB of zeros is
  * roughly 200 KB compressed.

@@ -1,5 +1,5 @@
 /**
- * Islands: weakly connected components other than the one(s) holding the entry pages (Linkloom DOMAIN.md,
+ * Islands: weakly connected components other than the one(s) holding the entry pages (docs/metrics.md,
  * "Metrics"). Without entry pages the largest weak component stands in for the main site, so a doc set
  * without configured entry pages still gets its stray clusters reported rather than every page flagged.
  */

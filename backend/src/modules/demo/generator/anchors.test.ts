@@ -4,7 +4,7 @@ import { pageAnchors, slugOf } from './anchors.js';
 
 describe('pageAnchors', () => {
   it('makes the same slugs as github-slugger, repeats included', () => {
-    // Reference: the `github-slugger` package itself (DOMAIN.md, outside sources).
+    // Reference: the `github-slugger` package itself (docs/link-rules.md, outside references).
     const headings = ['Steps', 'Steps', 'Before you start!', 'How-to: lending desk', 'Steps', 'Steps 1'];
     const slugger = new GithubSlugger();
     const want = ['Lending policy', ...headings].map((h) => slugger.slug(h));

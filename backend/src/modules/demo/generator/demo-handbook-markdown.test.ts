@@ -1,5 +1,5 @@
 /**
- * Checks the generated handbook with an outside CommonMark + GFM parser (remark, the parser DOMAIN.md names)
+ * Checks the generated handbook with an outside CommonMark + GFM parser (remark, the parser docs/link-rules.md names)
  * instead of trusting the generator's own bookkeeping: every link the generator recorded is found by the
  * parser on the same line with the same href, and the parser finds no other links (so the link-like text in
  * code blocks, code spans and the unused reference definition really is not a link). Heading anchors are
@@ -83,7 +83,7 @@ describe.each([1, 2, 3] as const)('demo handbook version %i, read by remark', (v
     }
   });
 
-  it('finds every way of writing a link that DOMAIN.md lists', () => {
+  it('finds every way of writing a link that docs/link-rules.md lists', () => {
     const all = [...probes.values()].flatMap((p) => p.links.map((l) => l.slice(l.indexOf('|') + 1)));
     const has = (pred: (h: string) => boolean) => all.some(pred);
     expect(has((h) => h.startsWith('../') && h.endsWith('.md'))).toBe(true);
@@ -124,7 +124,7 @@ describe.each([1, 2, 3] as const)('demo handbook version %i, read by remark', (v
     expect(texts.some((t) => /\{#[\w-]+\}$/.test(t))).toBe(true);
     for (const l of links.filter((x) => x.fragment && !x.form.startsWith('wiki') && x.target?.endsWith('.md'))) {
       const anchors = anchorsOf(files[l.target!] as string, probes.get(l.target!)!);
-      // Valid fragments must be real anchors and seeded bad ones must not (DOMAIN.md, rule 7).
+      // Valid fragments must be real anchors and seeded bad ones must not (docs/link-rules.md rule 7).
       expect(anchors.has(l.fragment!), `${l.source} -> ${l.href}`).toBe(l.status !== 'broken-anchor');
     }
     for (const l of links.filter((x) => x.form === 'wiki-heading')) {

@@ -1,8 +1,8 @@
 /**
  * Re-resolves every link of the demo handbook independently of the generator, to show the seeded statuses
- * follow DOMAIN.md's rules and not the generator's intentions. Relative and root-absolute hrefs are merged
+ * follow the rules of docs/link-rules.md and not the generator's intentions. Relative and root-absolute hrefs are merged
  * with the WHATWG URL parser (which implements RFC 3986, section 5.2 reference resolution); wiki links follow
- * DOMAIN.md rule 6 written out here from scratch; front matter is read with the `yaml` package.
+ * docs/link-rules.md rule 6 written out here from scratch; front matter is read with the `yaml` package.
  */
 import { describe, expect, it } from 'vitest';
 import { parse as parseYaml } from 'yaml';
@@ -11,7 +11,7 @@ import type { LinkStatus, RenderedLink } from './types.js';
 
 const SITE = 'https://brackenridge-tools.example';
 const BASE = '/handbook/';
-// A deep fake root: a relative link that climbs out of it has left the doc set (DOMAIN.md rule 4).
+// A deep fake root: a relative link that climbs out of it has left the doc set (docs/link-rules.md rule 4).
 const ROOT = 'https://resolve.invalid/r/r/r/r/r/r/';
 
 type Files = Record<string, string | Uint8Array>;

@@ -64,7 +64,7 @@ describe('expectedFindings on a hand-drawn graph', () => {
     expect(f.orphans).toEqual(['o']);
     expect(f.deadEnds).toEqual(['d', 'e']);
     expect(f.unreachable).toEqual(['o', 'x', 'y']);
-    // "More than 3 clicks deep" (DOMAIN.md; a rule of thumb, common practice, no source).
+    // "More than 3 clicks deep" (docs/metrics.md; a rule of thumb, common practice, no source).
     expect(f.deepPages).toEqual(['d']);
     expect(f.islands).toEqual([['x', 'y']]);
     expect(f.brokenLinks).toEqual([{ sourcePath: 'b', href: 'nowhere', line: 1 }]);

@@ -2,7 +2,7 @@
  * The generator's own model of the link graph, from which the expected findings are derived: breadth-first
  * search for click depth and reachability (Cormen et al., "Introduction to Algorithms", 3rd ed., section 22.2),
  * in/out sets for orphans and dead ends, and weakly connected components (union-find over undirected edges)
- * for islands. Definitions follow DOMAIN.md; it deliberately does not call the product's resolver.
+ * for islands. Definitions follow docs/metrics.md and docs/link-rules.md; it deliberately does not call the product's resolver.
  */
 import type { ExpectedFindings, LinkFinding, LinkStatus, PagePlan, RenderedLink } from './types.js';
 

@@ -53,7 +53,7 @@ describe('generateDemoHandbook', () => {
     expect(expected.unreachable).toEqual([...expected.orphans, ...expected.islands.flat()].sort());
     for (const p of [...expected.orphans, ...expected.deadEnds, ...expected.deepPages, ...expected.unreachable])
       expect(files[p], p).toBeDefined();
-    // The entry page is never an orphan (DOMAIN.md, Metrics: entry pages are exempt).
+    // The entry page is never an orphan (docs/metrics.md: entry pages are exempt).
     expect(expected.orphans).not.toContain('index.md');
   });
 

@@ -18,7 +18,7 @@ export function publishedPath(path: string): string {
 }
 
 /**
- * The shortest wiki name that finds exactly this page under DOMAIN.md's lookup order: the bare file name when
+ * The shortest wiki name that finds exactly this page under the lookup order of docs/link-rules.md rule 6: the bare file name when
  * no other page path ends with it (checked as a plain string suffix, the stricter reading), else the full path.
  */
 export function wikiName(target: PagePlan, allPaths: readonly string[]): string {

@@ -3,7 +3,7 @@ import { linkSyntax, type SyntaxContext } from './link-syntax.js';
 import { pick, randomFor, type Random } from './prng.js';
 import type { PagePlan, PlannedLink, RenderedLink } from './types.js';
 
-/** Raw HTML anchors (`id` attributes) some pages carry, which DOMAIN.md counts as link targets. */
+/** Raw HTML anchors (`id` attributes) some pages carry, which docs/link-rules.md rule 7 counts as link targets. */
 export const HTML_IDS: Record<string, string[]> = { 'policies/key-holding.md': ['key-register'] };
 
 const STANDALONE = new Set(['image', 'wiki-image', 'embed']);

@@ -7,7 +7,7 @@ const ALL: HandbookVersion[] = [1, 2, 3];
 const FW = 'onboarding/first-week.md';
 const LENDING = 'policies/lending-policy.md';
 
-/** Links written on purpose: one of every kind DOMAIN.md names, and the seeded problems with their versions. */
+/** Links written on purpose: one of every kind docs/link-rules.md names, and the seeded problems with their versions. */
 const SPECIALS: Special[] = [
   // Showcase on the first-week page: every way of writing a link.
   { versions: ALL, source: FW, form: 'site-url', status: 'page', target: LENDING, label: 'the lending policy on our website' },

@@ -55,7 +55,7 @@ export type LinkForm =
   | 'inline-raw'
   | 'empty';
 
-/** What the link resolves to under DOMAIN.md, decided by the generator when it plans the link. */
+/** What the link resolves to under docs/link-rules.md, decided by the generator when it plans the link. */
 export type LinkStatus =
   | 'page'
   | 'self'

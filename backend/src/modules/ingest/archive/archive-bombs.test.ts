@@ -1,5 +1,5 @@
 /**
- * RELIABILITY.md checks 10, 11, 13-16 and 19 (2^40 declared): every bomb is refused from declared
+ * docs/threats.md checks 10, 11, 13-16 and 19 (2^40 declared): every bomb is refused from declared
  * metadata. Asserted: the code, the details, zero inflaters created, zero entries opened, and (check 15)
  * not one central-directory record read. Wall time and RSS growth are measured and printed, not asserted.
  */

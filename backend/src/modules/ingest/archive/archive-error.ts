@@ -1,5 +1,5 @@
 /**
- * The one error type of the archive readers. Codes and sentences follow RELIABILITY.md checks 5-24; the
+ * The one error type of the archive readers. Codes and sentences follow docs/threats.md checks 5-24; the
  * HTTP layer maps it to `{ statusCode, code, message, details }`. Details name entries, never server paths.
  */
 

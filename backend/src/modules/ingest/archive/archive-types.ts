@@ -1,6 +1,6 @@
 /**
  * Shapes and limits shared by the archive and folder readers. Limit values are the starting values of
- * RELIABILITY.md section 1.6; callers override them from configuration.
+ * docs/threats.md, "Limits"; callers override them from configuration.
  */
 
 export interface ArchiveLimits {

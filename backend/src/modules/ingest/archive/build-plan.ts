@@ -1,7 +1,7 @@
 /**
  * Turns the metadata of every entry (central-directory records, or a folder walk) into an ArchivePlan, or
  * throws one ArchiveError naming all offenders of the most severe kind. Pure: no I/O, nothing inflated.
- * Checks follow RELIABILITY.md section 1.6 and checks 8-24; the overlap rule follows D. Fifield, "A better
+ * Checks follow docs/threats.md, "Limits" and checks 8-24; the overlap rule follows D. Fifield, "A better
  * zip bomb" (WOOT '19, bamsoftware.com/hacks/zipbomb): entries whose local data ranges overlap are refused.
  */
 import { archiveError, formatBytes } from './archive-error.js';

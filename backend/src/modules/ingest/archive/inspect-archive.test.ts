@@ -1,5 +1,5 @@
 /**
- * RELIABILITY.md checks 5-9, 17, 18, 20-24 at the module level: each hostile archive is refused with the
+ * docs/threats.md checks 5-9, 17, 18, 20-24 at the module level: each hostile archive is refused with the
  * documented code and status, names its offenders, inflates nothing and writes no file anywhere.
  */
 import { existsSync } from 'node:fs';

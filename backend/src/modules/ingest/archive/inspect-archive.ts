@@ -1,5 +1,5 @@
 /**
- * Pass 1 of RELIABILITY.md 1.7: magic bytes, entry count, then one pass over central-directory records.
+ * Pass 1 of docs/threats.md, "Import pipeline": magic bytes, entry count, then one pass over central-directory records.
  * Inflates nothing and never opens a read stream, so every bomb is refused from its declared metadata.
  */
 import { archiveError } from './archive-error.js';

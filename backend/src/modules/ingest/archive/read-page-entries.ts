@@ -1,5 +1,5 @@
 /**
- * Pass 2 of RELIABILITY.md 1.7: streams the page entries of an inspected archive. Assets are never read.
+ * Pass 2 of docs/threats.md, "Import pipeline": streams the page entries of an inspected archive. Assets are never read.
  * Each entry goes through a byte counter that stops at the declared size (lying sizes stop within one
  * inflate chunk of it) and a CRC-32 check, because yauzl 3.4 does not check CRCs (its README, "No CRC-32
  * Checking"). CRC-32 as in APPNOTE.TXT 4.4.7, computed with Node's zlib.crc32.

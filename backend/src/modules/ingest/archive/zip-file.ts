@@ -1,5 +1,5 @@
 /**
- * yauzl access shared by inspection and reading. Options, decided against RELIABILITY.md 1.7 step 3:
+ * yauzl access shared by inspection and reading. Options, decided against docs/threats.md, "Import pipeline" step 3:
  * - lazyEntries: true      one record at a time, so a 50,000-entry directory is never held as events;
  * - decodeStrings: false   raw name bytes, so bit 11 / CP437 / invalid UTF-8 are decided in entry-name.ts
  *                          (with `true`, yauzl replaces invalid UTF-8 by U+FFFD and honours 0x7075 fields);

@@ -1,5 +1,5 @@
 /**
- * One page's bytes to stored facts: the decoding rules of RELIABILITY.md checks 27-29, then the shared link
+ * One page's bytes to stored facts: the decoding rules of docs/threats.md checks 27-29, then the shared link
  * core's `extractPage`. Pure and synchronous, so it runs the same in a worker thread and in-process.
  */
 import { extractPage, type FrontMatter, type Heading, type RawLink } from '@linkloom/shared/links';

@@ -1,5 +1,5 @@
 /**
- * A small pool of parser threads (RELIABILITY.md 1.6: 2 s per page, 512 MiB heap per parser). Batches of
+ * A small pool of parser threads (docs/threats.md, "Limits": 2 s per page, 512 MiB heap per parser). Batches of
  * pages go to idle workers; a watchdog reads each worker's shared progress cells and, when one page runs past
  * the limit, terminates that worker, flags the page PARSE_TIMEOUT, re-queues the rest of its batch and starts
  * a replacement. A worker that dies (heap limit) fails the whole pool with PARSE_RESOURCE.

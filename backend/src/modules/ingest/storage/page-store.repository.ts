@@ -2,7 +2,7 @@
  * Bulk writes of a snapshot's pages, links and assets. Each batch is one short statement that carries its
  * rows as a single JSON parameter (`json_to_recordset`), which PGlite and node-postgres bind the same way and
  * which keeps statements to a few MB. No transaction spans batches: PGlite serialises every query behind an
- * open transaction (RELIABILITY.md 1.7, P5), so a long one would stall every other request.
+ * open transaction (docs/threats.md, "Import pipeline", P5), so a long one would stall every other request.
  */
 import { Injectable } from '@nestjs/common';
 import { type SQL, sql } from 'drizzle-orm';

@@ -13,7 +13,7 @@ export interface ImportKit {
   upload(bytes: Buffer, fileName?: string): Promise<{ status: number; body: any }>;
   waitFor(snapshotId: string, timeoutMs?: number): Promise<any>;
   importAndWait(bytes: Buffer): Promise<any>;
-  /** What must not change after a rejected or failed upload (RELIABILITY.md "Nothing lost"). */
+  /** What must not change after a rejected or failed upload (docs/threats.md "Nothing lost"). */
   state(): Promise<StoredState>;
   rows(snapshotId: string): Promise<{ pages: number; links: number; assets: number }>;
   pagePaths(snapshotId: string): Promise<string[]>;

@@ -1,5 +1,5 @@
 /**
- * Runs multer for the one `archive` file part with the limits of RELIABILITY.md 1.6, before the handler.
+ * Runs multer for the one `archive` file part with the limits of docs/threats.md, "Limits", before the handler.
  * Our own interceptor rather than Nest's FileInterceptor so every multer/busboy failure gets a stable code.
  */
 import { type CallHandler, type ExecutionContext, Inject, Injectable, type NestInterceptor } from '@nestjs/common';
@@ -19,7 +19,7 @@ export class ArchiveUploadInterceptor implements NestInterceptor {
     this.upload = multer({
       storage: hashingDiskStorage(uploadDirOf(config)),
       limits: {
-        // multer needs an integer here (a float disables the check): RELIABILITY.md 1.6.
+        // multer needs an integer here (a float disables the check): docs/threats.md, "Limits".
         fileSize: Math.floor(config.uploadMaxBytes),
         files: 1,
         fields: 5,

@@ -1,5 +1,5 @@
 /**
- * multer storage engine for archives (RELIABILITY.md 1.7 step 1): a random name in a dedicated folder, mode
+ * multer storage engine for archives (docs/threats.md, "Import pipeline" step 1): a random name in a dedicated folder, mode
  * 0600, created exclusively (`wx`), and the SHA-256 of the bytes computed while they stream to disk.
  */
 import { createHash, randomBytes } from 'node:crypto';

@@ -1,4 +1,4 @@
-/** multer and busboy failures as the contract's errors (RELIABILITY.md checks 2-4): 413 for size, else 400. */
+/** multer and busboy failures as the contract's errors (docs/threats.md checks 2-4): 413 for size, else 400. */
 import { AppError } from '../../../common/app-error.js';
 import { formatBytes } from '../archive/index.js';
 

@@ -10,7 +10,7 @@ describe('chooseEntryPages', () => {
     expect(choice.warnings.map((w) => w.code)).toEqual(['ENTRY_PAGE_MISSING']);
   });
 
-  // DOMAIN.md "Metrics": the default entry page is the root index page (first of indexFileNames present).
+  // docs/metrics.md: the default entry page is the root index page (first of indexFileNames present).
   it('falls back to the first root index file, never to one in a folder', () => {
     expect(chooseEntryPages(new Set(['guide/index.md', 'README.md', '_index.md']), [], INDEX_NAMES)).toEqual({
       paths: ['README.md'],

@@ -1,5 +1,5 @@
 /**
- * Which pages a run starts from (DOMAIN.md, "Metrics": entry pages are set per doc set; default the root
+ * Which pages a run starts from (docs/metrics.md: entry pages are set per doc set; default the root
  * index page). Without any, reachability and click depth cannot be judged: the engine then treats every
  * page as reachable and flags no unreachable or deep pages rather than flagging them all, and the run
  * carries a warning that says how to fix it.

@@ -7,7 +7,7 @@ describe('csv', () => {
     expect(csvLine(['a', 'b,c', 'say "hi"', 'two\nlines', null, 3])).toBe('a,"b,c","say ""hi""","two\nlines",,3\r\n');
   });
 
-  // OWASP ASVS 5.0 requirement 1.2.10 (CSV and formula injection) / RELIABILITY check 39.
+  // OWASP ASVS 5.0 requirement 1.2.10 (CSV and formula injection) / docs/threats.md check 39.
   it('defuses cells a spreadsheet would read as formulas, but not numbers', () => {
     expect(csvCell('=HYPERLINK("http://x")')).toBe(`"'=HYPERLINK(""http://x"")"`);
     for (const start of ['+', '-', '@', '\t', '\r']) expect(csvCell(`${start}1`).replace(/^"/, '')).toMatch(/^'/);

@@ -1,6 +1,6 @@
 /**
  * CSV as RFC 4180 writes it (fields with comma, quote or line break quoted, quotes doubled, CRLF line
- * ends), with formula-injection defence for spreadsheets (OWASP ASVS 5.0 1.2.10 / RELIABILITY check 39):
+ * ends), with formula-injection defence for spreadsheets (OWASP ASVS 5.0 1.2.10 / docs/threats.md check 39):
  * a text cell starting with =, +, -, @, tab or carriage return is prefixed with a single quote.
  */
 const FORMULA_START = /^[=+\-@\t\r]/;

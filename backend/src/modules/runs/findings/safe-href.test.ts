@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { hrefFields, isSafeHref } from './safe-href.js';
 
 describe('isSafeHref', () => {
-  // RELIABILITY check 36 (OWASP ASVS 5.0 1.2.2): the WHATWG URL parser strips tab and newline anywhere and
+  // docs/threats.md check 36 (OWASP ASVS 5.0 1.2.2): the WHATWG URL parser strips tab and newline anywhere and
   // leading C0 controls and spaces before reading the scheme, so the same is done here.
   it('refuses script and data schemes however they are disguised', () => {
     for (const href of [

@@ -1,5 +1,5 @@
 /**
- * Which stored hrefs the API may hand to a browser as a link (RELIABILITY check 36, OWASP ASVS 1.2.2): an
+ * Which stored hrefs the API may hand to a browser as a link (docs/threats.md check 36, OWASP ASVS 1.2.2): an
  * allowlist of schemes (http, https, mailto) and scheme-less relative references. Browsers drop tabs,
  * newlines and leading control characters or spaces before reading the scheme, so the check does too;
  * anything else (javascript:, data:, vbscript:, file:, entity-encoded tricks) is shown only as text.

@@ -4,7 +4,7 @@
 // calls the API.
 import { Button, Dialog, DialogActions, DialogContent, DialogContentText, DialogTitle } from '@mui/material';
 
-/** Task kinds of API.md "Work", chosen from the finding so the task says what to fix. */
+/** Task kinds of docs/api.md "Work", chosen from the finding so the task says what to fix. */
 export type FixTaskKind = 'add-inbound-links' | 'repair-broken-links' | 'add-outbound-links' | 'make-reachable' | 'other';
 
 export interface FixTaskRequest {
