@@ -25,7 +25,7 @@ export function AppShell() {
   const { docSetId } = useParams();
   const health = useHealth();
   const role = session?.user.role ?? 'viewer';
-  const wide = useMediaQuery(useTheme().breakpoints.up('md'));
+  const wide = useMediaQuery(useTheme().breakpoints.up('md'), { defaultMatches: true });
   const [drawerOpen, setDrawerOpen] = useState(false);
   return (
     <Box sx={{ display: 'flex', minHeight: '100vh' }}>
