@@ -31,6 +31,14 @@ export async function horizontalOverflow(page: Page): Promise<{ overflow: number
   });
 }
 
+/** The part of an axe-core result this check reads. */
+interface RawViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: unknown }[];
+}
+
 export interface AxeViolation {
   id: string;
   impact: string | null;
@@ -45,12 +53,12 @@ export interface AxeViolation {
 export async function seriousAxeViolations(page: Page): Promise<AxeViolation[]> {
   if (!(await page.evaluate(() => 'axe' in window))) await page.evaluate(axeSource); // through the debugging protocol, so the app's CSP does not block it
   return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<any> } }).axe;
+    const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<{ violations: RawViolation[] }> } }).axe;
     const result = await axe.run(document, {
       runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'] },
     });
-    return (result.violations as any[])
+    return result.violations
       .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-      .map((v) => ({ id: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 4).map((n: any) => String(n.target)) }));
+      .map((v) => ({ id: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 4).map((n) => String(n.target)) }));
   });
 }
