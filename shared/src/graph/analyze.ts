@@ -1,11 +1,11 @@
 /**
  * One analysis of a doc set's link graph: stationary score, rank, inbound/outbound counts, click depth,
- * reachability, orphans, dead ends, deep pages, islands and isolated pages, as defined in docs/metrics.md.
+ * reachability, orphans, dead ends, deep pages and islands, as defined in docs/metrics.md.
  *
  * When no entry page is given (or none of the given ids is a page), reachability cannot be judged, so the
  * analysis reports no false alarms: every page counts as reachable with depth null and deep false, the
- * largest weak component (lowest page index on a tie) is treated as the main site and only the other groups
- * of two or more pages are islands, and an 'entry-pages' teleport falls back to uniform. `summary.entryPagesFound` says it happened.
+ * largest weak component (lowest page index on a tie) is treated as the main site and only the others are
+ * islands, and an 'entry-pages' teleport falls back to uniform. `summary.entryPagesFound` says it happened.
  */
 import { buildLinkGraph, type LinkGraph, type LinkPair } from './build-graph.js';
 import { strongComponents, weakComponents } from './algorithms/components.js';
@@ -13,7 +13,6 @@ import { rankByScore } from './algorithms/rank-order.js';
 import { islandNumbers } from './algorithms/islands.js';
 import { computeClickDepth } from './algorithms/reachability.js';
 import { computeStationaryScore } from './algorithms/stationary-score.js';
-import { isIsolated, pageFindingCounts, type PageFindingCounts } from './finding-counts.js';
 
 export interface AnalyzeLinkGraphInput {
   readonly pageIds: readonly string[];
@@ -45,9 +44,7 @@ export interface PageMetrics {
   readonly orphan: boolean;
   readonly deadEnd: boolean;
   readonly deep: boolean;
-  /** No link to or from another page (docs/metrics.md "Isolated pages"). */
-  readonly isolated: boolean;
-  /** null for the component holding the entry pages and for isolated pages, else an island number from 1. */
+  /** null for the component holding the entry pages, else an island number from 1. */
   readonly islandId: number | null;
 }
 
@@ -61,7 +58,14 @@ export interface LinkGraphSummary {
   readonly iterations: number;
   readonly residual: number;
   readonly converged: boolean;
-  readonly counts: Readonly<PageFindingCounts> & { readonly sccCount: number };
+  readonly counts: {
+    readonly orphans: number;
+    readonly deadEnds: number;
+    readonly unreachable: number;
+    readonly deepPages: number;
+    readonly islands: number;
+    readonly sccCount: number;
+  };
 }
 
 export interface LinkGraphAnalysis {
@@ -96,7 +100,14 @@ export function analyzeLinkGraph(input: AnalyzeLinkGraphInput): LinkGraphAnalysi
     depthThreshold: input.depthThreshold,
   };
   const pages = input.pageIds.map((pageId, i) => pageMetrics(pageId, i, facts));
-  const counts = { ...pageFindingCounts(pages), sccCount: strongComponents(graph).count };
+  const counts = {
+    orphans: pages.filter((p) => p.orphan).length,
+    deadEnds: pages.filter((p) => p.deadEnd).length,
+    unreachable: pages.filter((p) => !p.reachable).length,
+    deepPages: pages.filter((p) => p.deep).length,
+    islands: islandOf.reduce((max, id) => Math.max(max, id), 0),
+    sccCount: strongComponents(graph).count,
+  };
   const { iterations, residual, converged } = score;
   const summary = {
     pageCount: n,
@@ -140,7 +151,6 @@ function pageMetrics(pageId: string, i: number, facts: PageFacts): PageMetrics {
     orphan: inboundCount === 0 && facts.isEntry[i] === 0,
     deadEnd: outboundCount === 0,
     deep: pageDepth !== null && pageDepth > facts.depthThreshold,
-    isolated: isIsolated({ inboundCount, outboundCount }),
     islandId: facts.islandOf[i] === 0 ? null : facts.islandOf[i],
   };
 }

@@ -22,7 +22,7 @@ export type { Components } from './algorithms/components.js';
 export { computeScoreGain, computeScoreGainsForTarget } from './algorithms/score-gain.js';
 export type { ScoreGain, ScoreGainOptions } from './algorithms/score-gain.js';
 
-/** Islands: groups of two or more pages apart from the entry pages' part (0 = main site or isolated page). */
+/** Islands: weak components apart from the entry pages' own (0 = main site). */
 export { islandNumbers } from './algorithms/islands.js';
 
 /** Rank pages by score (1 = highest; equal scores ordered by page id). */
@@ -34,14 +34,3 @@ export { rankByScore } from './algorithms/rank-order.js';
  */
 export { analyzeLinkGraph } from './analyze.js';
 export type { AnalyzeLinkGraphInput, LinkGraphAnalysis, LinkGraphSummary, PageMetrics } from './analyze.js';
-
-/** One definition per count of a run (docs/metrics.md): predicates and counts over the stored findings. */
-export {
-  isBrokenAnchor,
-  isBrokenPageLink,
-  isIsolated,
-  linkFindingCounts,
-  needsLinks,
-  pageFindingCounts,
-} from './finding-counts.js';
-export type { LinkFindingCounts, LinkStatusCount, PageFindingCounts, PageFindingFlags } from './finding-counts.js';

