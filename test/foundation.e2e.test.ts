@@ -43,7 +43,7 @@ describe('the product, started as a user would start it', () => {
         { timeout: 20_000 },
       )
       .toBe(true);
-    expect(await page.getByRole('button', { name: /Edda Editor, account menu/ }).count()).toBe(1);
+    expect(await page.getByRole('button', { name: /Account menu for Edda Editor/ }).count()).toBe(1);
     expect(await page.evaluate(() => document.fonts.check('16px Roboto'))).toBe(true);
     await screenshot(page, 'foundation-shell-editor');
     // Editors have no user administration.

@@ -1,7 +1,6 @@
-import { Suspense, useState } from 'react';
+import { Suspense } from 'react';
 import { Link as RouterLink, Outlet, useParams } from 'react-router';
-import { Alert, Box, Divider, Drawer, IconButton, LinearProgress, Toolbar, Typography, useMediaQuery, useTheme } from '@mui/material';
-import MenuIcon from '@mui/icons-material/Menu';
+import { Alert, Box, Divider, Drawer, LinearProgress, Toolbar, Typography } from '@mui/material';
 import { LogoMark } from '../../components/brand/logo-mark.js';
 import { adminNav, docSetNav, globalNav } from '../../config/navigation.js';
 import { useSession } from '../../lib/session.js';
@@ -25,8 +24,6 @@ export function AppShell() {
   const { docSetId } = useParams();
   const health = useHealth();
   const role = session?.user.role ?? 'viewer';
-  const wide = useMediaQuery(useTheme().breakpoints.up('md'), { defaultMatches: true });
-  const [drawerOpen, setDrawerOpen] = useState(false);
   return (
     <Box sx={{ display: 'flex', minHeight: '100vh' }}>
       <Box
@@ -36,13 +33,9 @@ export function AppShell() {
       >
         Skip to content
       </Box>
-      {/* Below md the navigation is a drawer that opens over the screen, so a phone keeps its full width. */}
       <Drawer
-        variant={wide ? 'permanent' : 'temporary'}
-        open={wide || drawerOpen}
-        onClose={() => setDrawerOpen(false)}
-        onClick={() => !wide && setDrawerOpen(false)}
-        sx={{ width: wide ? DRAWER_WIDTH : 0, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, bgcolor: 'background.default' } }}
+        variant="permanent"
+        sx={{ width: DRAWER_WIDTH, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, bgcolor: 'background.default' } }}
       >
         <Toolbar component={RouterLink} to="/" sx={{ gap: 1.5, textDecoration: 'none', color: 'primary.main' }}>
           <LogoMark size={30} />
@@ -58,13 +51,8 @@ export function AppShell() {
       </Drawer>
       <Box sx={{ flex: 1, minWidth: 0, display: 'flex', flexDirection: 'column' }}>
         <Toolbar variant="dense" sx={{ justifyContent: 'flex-end', gap: 2, borderBottom: 1, borderColor: 'divider' }}>
-          {!wide && (
-            <IconButton edge="start" aria-label="Open navigation" onClick={() => setDrawerOpen(true)} sx={{ mr: 'auto' }}>
-              <MenuIcon />
-            </IconButton>
-          )}
           {health.data?.demo && (
-            <Alert severity="info" variant="outlined" sx={{ py: 0, flex: 1, minWidth: 0 }}>
+            <Alert severity="info" variant="outlined" sx={{ py: 0, flex: 1 }}>
               Demo data: this Linkloom holds an invented handbook to explore. Changes here may be reset.
             </Alert>
           )}

@@ -26,12 +26,9 @@ export function UserMenu() {
         color="inherit"
         onClick={(e) => setAnchor(e.currentTarget)}
         aria-haspopup="menu"
-        // The accessible name starts with the visible name (WCAG 2.5.3, label in name); the initial is decoration.
-        aria-label={`${user.name}, account menu`}
+        aria-label={`Account menu for ${user.name}`}
         startIcon={
-          <Avatar aria-hidden sx={{ width: 28, height: 28, fontSize: 14, bgcolor: 'secondary.main' }}>
-            {user.name.slice(0, 1).toUpperCase()}
-          </Avatar>
+          <Avatar sx={{ width: 28, height: 28, fontSize: 14, bgcolor: 'secondary.main' }}>{user.name.slice(0, 1).toUpperCase()}</Avatar>
         }
       >
         {user.name}

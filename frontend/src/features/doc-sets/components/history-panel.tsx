@@ -1,4 +1,4 @@
-import { TableContainer, LinearProgress, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import { LinearProgress, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { ErrorPanel } from '../../../components/ui/error-panel.js';
 import { LoadingSkeleton } from '../../../components/ui/loading-skeleton.js';
 import type { Run } from '@linkloom/shared';
@@ -55,36 +55,34 @@ export function HistoryPanel({ docSetId, runs }: { docSetId: string; runs: Run[]
         </Typography>
       )}
       {entries.length > 0 && (
-        <TableContainer tabIndex={0} role="region" aria-label="Imports and runs (scrolls sideways)" sx={{ overflowX: 'auto' }}>
-          <Table size="small" aria-label="Imports and runs">
-            <TableHead>
-              <TableRow>
-                <TableCell>When</TableCell>
-                <TableCell>What</TableCell>
-                <TableCell>Status</TableCell>
-                <TableCell>Result</TableCell>
+        <Table size="small" aria-label="Imports and runs">
+          <TableHead>
+            <TableRow>
+              <TableCell>When</TableCell>
+              <TableCell>What</TableCell>
+              <TableCell>Status</TableCell>
+              <TableCell>Result</TableCell>
+            </TableRow>
+          </TableHead>
+          <TableBody>
+            {entries.map((e, i) => (
+              <TableRow key={`${e.what}-${e.at}-${i}`}>
+                <TableCell>{when(e.at)}</TableCell>
+                <TableCell>{e.what}</TableCell>
+                <TableCell>
+                  <StatusChip status={e.status} />
+                </TableCell>
+                <TableCell>
+                  {e.progress !== null ? (
+                    <LinearProgress variant="determinate" value={e.progress * 100} aria-label="Import progress" />
+                  ) : (
+                    e.detail
+                  )}
+                </TableCell>
               </TableRow>
-            </TableHead>
-            <TableBody>
-              {entries.map((e, i) => (
-                <TableRow key={`${e.what}-${e.at}-${i}`}>
-                  <TableCell>{when(e.at)}</TableCell>
-                  <TableCell>{e.what}</TableCell>
-                  <TableCell>
-                    <StatusChip status={e.status} />
-                  </TableCell>
-                  <TableCell>
-                    {e.progress !== null ? (
-                      <LinearProgress variant="determinate" value={e.progress * 100} aria-label="Import progress" />
-                    ) : (
-                      e.detail
-                    )}
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
-        </TableContainer>
+            ))}
+          </TableBody>
+        </Table>
       )}
     </Paper>
   );
